@@ -1,5 +1,5 @@
 import { SPEED_OF_LIGHT } from '../physics/constants';
-import type { PathState } from './pathState';
+import { type PathState, pathState } from './pathState';
 import { splineKnotDerivatives } from './spline';
 
 /** Raw columns of a path; velocities and accelerations are optional. */
@@ -27,6 +27,8 @@ export class PathError extends Error {
     this.name = 'PathError';
   }
 }
+
+type PathColumnsF64 = { [K in keyof PathColumns]: Float64Array };
 
 const COLUMN_GROUPS = [
   ['vx', 'vy', 'vz'],
@@ -104,6 +106,16 @@ export class SampledPath {
     this.maxSpeed = this.checkSpeeds();
   }
 
+  /**
+   * Rebuilds a path from columns that a validated path produced (every derivative filled in,
+   * speeds checked), without copying or checking again: for worker threads.
+   */
+  static restore(columns: Required<PathColumnsF64> & { maxSpeed: number }): SampledPath {
+    const path = Object.create(SampledPath.prototype) as SampledPath;
+    Object.assign(path, { count: columns.t.length, ...columns });
+    return path;
+  }
+
   /** Index i of the piece with t[i] <= time < t[i+1]; -1 before the path, count-1 after. */
   locate(time: number, hint = -1): number {
     const t = this.t;
@@ -144,6 +156,9 @@ export class SampledPath {
       out.ax = 0;
       out.ay = 0;
       out.az = 0;
+      out.jx = 0;
+      out.jy = 0;
+      out.jz = 0;
       return i;
     }
     const t0 = this.t[i];
@@ -155,19 +170,23 @@ export class SampledPath {
     const s5 = s4 * s;
     const ih = 1 / h;
     const ih2 = ih * ih;
+    const ih3 = ih2 * ih;
     // Each axis: p(s) = c0 + c1 s + ... + c5 s^5 matching p, h v, h² a at both ends.
     const cx = hermite(this.x, this.vx, this.ax, i, h);
     out.px = cx.c0 + cx.c1 * s + cx.c2 * s2 + cx.c3 * s3 + cx.c4 * s4 + cx.c5 * s5;
     out.vx = (cx.c1 + 2 * cx.c2 * s + 3 * cx.c3 * s2 + 4 * cx.c4 * s3 + 5 * cx.c5 * s4) * ih;
     out.ax = (2 * cx.c2 + 6 * cx.c3 * s + 12 * cx.c4 * s2 + 20 * cx.c5 * s3) * ih2;
+    out.jx = (6 * cx.c3 + 24 * cx.c4 * s + 60 * cx.c5 * s2) * ih3;
     const cy = hermite(this.y, this.vy, this.ay, i, h);
     out.py = cy.c0 + cy.c1 * s + cy.c2 * s2 + cy.c3 * s3 + cy.c4 * s4 + cy.c5 * s5;
     out.vy = (cy.c1 + 2 * cy.c2 * s + 3 * cy.c3 * s2 + 4 * cy.c4 * s3 + 5 * cy.c5 * s4) * ih;
     out.ay = (2 * cy.c2 + 6 * cy.c3 * s + 12 * cy.c4 * s2 + 20 * cy.c5 * s3) * ih2;
+    out.jy = (6 * cy.c3 + 24 * cy.c4 * s + 60 * cy.c5 * s2) * ih3;
     const cz = hermite(this.z, this.vz, this.az, i, h);
     out.pz = cz.c0 + cz.c1 * s + cz.c2 * s2 + cz.c3 * s3 + cz.c4 * s4 + cz.c5 * s5;
     out.vz = (cz.c1 + 2 * cz.c2 * s + 3 * cz.c3 * s2 + 4 * cz.c4 * s3 + 5 * cz.c5 * s4) * ih;
     out.az = (2 * cz.c2 + 6 * cz.c3 * s + 12 * cz.c4 * s2 + 20 * cz.c5 * s3) * ih2;
+    out.jz = (6 * cz.c3 + 24 * cz.c4 * s + 60 * cz.c5 * s2) * ih3;
     return i;
   }
 
@@ -178,7 +197,7 @@ export class SampledPath {
 
   private checkSpeeds(): number {
     const c = SPEED_OF_LIGHT;
-    const probe: PathState = { px: 0, py: 0, pz: 0, vx: 0, vy: 0, vz: 0, ax: 0, ay: 0, az: 0 };
+    const probe = pathState();
     let maxSpeed = 0;
     for (let i = 0; i < this.count; i++) {
       const speed = Math.hypot(this.vx[i], this.vy[i], this.vz[i]);

@@ -23,7 +23,7 @@ export function addLienardWiechert(
   const Rx = rx - s.px;
   const Ry = ry - s.py;
   const Rz = rz - s.pz;
-  const R = Math.hypot(Rx, Ry, Rz);
+  const R = Math.sqrt(Rx * Rx + Ry * Ry + Rz * Rz);
   if (!(R > 0)) return false;
   const nx = Rx / R;
   const ny = Ry / R;
@@ -70,7 +70,7 @@ export function dopplerFactor(rx: number, ry: number, rz: number, s: PathState):
   const Rx = rx - s.px;
   const Ry = ry - s.py;
   const Rz = rz - s.pz;
-  const R = Math.hypot(Rx, Ry, Rz);
+  const R = Math.sqrt(Rx * Rx + Ry * Ry + Rz * Rz);
   if (!(R > 0)) return 1;
   return 1 - (Rx * s.vx + Ry * s.vy + Rz * s.vz) / (R * SPEED_OF_LIGHT);
 }

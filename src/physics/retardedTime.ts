@@ -21,13 +21,20 @@ export function retardedSolution(): RetardedSolution {
 }
 
 const MAX_ITERATIONS = 200;
+const TAYLOR_FRACTION = 1e-6;
+
+/** Duration of a path piece; unbounded outside the samples, where the motion is straight. */
+function pieceDuration(path: SampledPath, piece: number): number {
+  if (piece < 0 || piece >= path.count - 1) return Number.POSITIVE_INFINITY;
+  return path.t[piece + 1] - path.t[piece];
+}
 
 /**
- * Solves c (t - t_r) = |r - r0(t_r)| for the delay τ = t - t_r by Newton's method kept
+ * Solves c (t - t_r) = |r - r0(t_r)| for the delay τ = t - t_r by Halley's method kept
  * inside a bracket [lo, hi] with g(lo) <= 0 <= g(hi), g(τ) = cτ - |r - r0(t - τ)|.
  * g is strictly increasing for a sub-luminal path (g' = c - n·v > 0), so the root is unique
  * and bisection is always a safe fallback. `guessDelay` (NaN for none) warm-starts the
- * solve; `state` receives the path state at t_r.
+ * solve and `hint` the path look-up; `state` receives the path state at t_r.
  */
 export function solveRetardedTime(
   path: SampledPath,
@@ -41,39 +48,87 @@ export function solveRetardedTime(
   hint = -1,
 ): RetardedSolution {
   const c = SPEED_OF_LIGHT;
-  let piece = path.stateAt(t, state, hint);
-  const distanceNow = Math.hypot(rx - state.px, ry - state.py, rz - state.pz);
-  let iterations = 0;
-  if (distanceNow === 0) return finish(out, 0, t, piece, 0, 0);
-  // With every speed at most vmax, the root lies in [D/(c + vmax), D/(c - vmax)].
   // The speed check samples each piece at a few points, so widen vmax a little toward c.
-  const vmax = path.maxSpeed + 1e-3 * (c - path.maxSpeed);
-  let lo = distanceNow / (c + vmax);
-  let hi = distanceNow / (c - vmax);
-  let tau = guessDelay >= lo && guessDelay <= hi ? guessDelay : distanceNow / c;
+  const slowest = c - (path.maxSpeed + 1e-3 * (c - path.maxSpeed));
+  let piece = hint;
+  let lo = 0;
+  let hi = Number.POSITIVE_INFINITY;
+  let tau = guessDelay;
+  if (!(tau >= 0 && tau < Number.POSITIVE_INFINITY)) {
+    // Cold start: with every speed below c - slowest the root lies in [D/(2c), D/slowest].
+    piece = path.stateAt(t, state, piece);
+    const dx = rx - state.px;
+    const dy = ry - state.py;
+    const dz = rz - state.pz;
+    const distanceNow = Math.sqrt(dx * dx + dy * dy + dz * dz);
+    if (distanceNow === 0) return finish(out, 0, t, piece, 1, 0);
+    lo = distanceNow / (2 * c);
+    hi = distanceNow / slowest;
+    tau = distanceNow / c;
+  }
+  let iterations = 0;
   let residual = 0;
-  for (; iterations < MAX_ITERATIONS; iterations++) {
+  while (iterations < MAX_ITERATIONS) {
+    iterations++;
     piece = path.stateAt(t - tau, state, piece);
     const dx = rx - state.px;
     const dy = ry - state.py;
     const dz = rz - state.pz;
-    const dist = Math.hypot(dx, dy, dz);
+    const dist = Math.sqrt(dx * dx + dy * dy + dz * dz);
     residual = c * tau - dist;
     if (residual === 0) break;
-    if (residual < 0) lo = tau;
-    else hi = tau;
-    const slope = dist > 0 ? c - (dx * state.vx + dy * state.vy + dz * state.vz) / dist : c;
-    let next = tau - residual / slope;
-    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-    const step = Math.abs(next - tau);
-    tau = next;
-    // Stop once the step is at the rounding level of τ or the bracket has closed.
-    if (step <= 2 * Number.EPSILON * tau || hi - lo <= 2 * Number.EPSILON * hi) {
-      piece = path.stateAt(t - tau, state, piece);
+    // g' = c - n·v lies in [slowest, 2c], which bounds the root from this one evaluation.
+    if (residual < 0) {
+      lo = tau;
+      const bound = tau - residual / slowest;
+      if (bound < hi) hi = bound;
+    } else {
+      hi = tau;
+      const bound = tau - residual / slowest;
+      if (bound > lo) lo = bound;
+    }
+    // Halley's step (cubic convergence) from g' = c - n·v and g'' = n·a - (v² - (n·v)²)/R.
+    let step = residual / c;
+    if (dist > 0) {
+      const nv = (dx * state.vx + dy * state.vy + dz * state.vz) / dist;
+      const na = (dx * state.ax + dy * state.ay + dz * state.az) / dist;
+      const v2 = state.vx * state.vx + state.vy * state.vy + state.vz * state.vz;
+      const slope = c - nv;
+      const curvature = na - (v2 - nv * nv) / dist;
+      step = residual / slope;
+      const correction = 1 - (step * curvature) / (2 * slope);
+      if (correction > 0.5 && correction < 2) step /= correction;
+    }
+    // Converged: the step is at the rounding level of τ, so this state is the answer.
+    if (Math.abs(step) <= 2 * Number.EPSILON * tau) break;
+    // Nearly converged: the step is tiny against the piece, so a third-order Taylor update of
+    // the state is exact to rounding (the neglected snap term is (step/h)² ≤ 1e-12 of the
+    // acceleration change across the piece) and saves one more path evaluation.
+    if (Math.abs(step) <= TAYLOR_FRACTION * Math.min(tau, pieceDuration(path, piece))) {
+      tau -= step;
+      const dt = step;
+      const half = 0.5 * dt;
+      state.px += dt * (state.vx + half * (state.ax + (dt / 3) * state.jx));
+      state.py += dt * (state.vy + half * (state.ay + (dt / 3) * state.jy));
+      state.pz += dt * (state.vz + half * (state.az + (dt / 3) * state.jz));
+      state.vx += dt * (state.ax + half * state.jx);
+      state.vy += dt * (state.ay + half * state.jy);
+      state.vz += dt * (state.az + half * state.jz);
+      state.ax += dt * state.jx;
+      state.ay += dt * state.jy;
+      state.az += dt * state.jz;
       residual = c * tau - Math.hypot(rx - state.px, ry - state.py, rz - state.pz);
-      iterations++;
       break;
     }
+    let next = tau - step;
+    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+    if (next === tau || hi - lo <= 2 * Number.EPSILON * hi) {
+      tau = next;
+      piece = path.stateAt(t - tau, state, piece);
+      residual = c * tau - Math.hypot(rx - state.px, ry - state.py, rz - state.pz);
+      break;
+    }
+    tau = next;
   }
   return finish(out, tau, t - tau, piece, iterations, residual);
 }

@@ -1,0 +1,127 @@
+import { pathState } from '../path/pathState';
+import type { Charge } from '../physics/charge';
+import { clearFields, fieldSample } from '../physics/fieldSample';
+import { addLienardWiechert } from '../physics/lienardWiechert';
+import { retardedSolution, solveRetardedTime } from '../physics/retardedTime';
+import { MASK_CLEAR, MASK_ON_CHARGE } from './slicePlanes';
+import type { SliceSpec } from './sliceSpec';
+
+/** Where a run of rows writes: planes of `points` values each, starting at row `row0`. */
+export interface RowTarget {
+  planes: Float32Array;
+  mask: Uint8Array;
+  /** Points per plane in the target buffer. */
+  points: number;
+  /** Slice row stored at the target's first row. */
+  row0: number;
+}
+
+export interface KernelStats {
+  points: number;
+  iterations: number;
+  maxIterations: number;
+}
+
+const state = pathState();
+const solution = retardedSolution();
+const sample = fieldSample();
+
+/**
+ * Fields on slice rows [j0, j1) into `target`. Each retarded-time solve starts from the
+ * previous frame's delay at the same point when `warm` holds one (one plane of delays per
+ * charge, laid out like the target), else from the left neighbour, else the point below;
+ * the solver itself is bracketed, so a poor guess costs steps, never correctness.
+ * `warm` is updated in place with the new delays.
+ */
+export function computeSliceRows(
+  spec: SliceSpec,
+  charges: readonly Charge[],
+  j0: number,
+  j1: number,
+  target: RowTarget,
+  nearRadius: number,
+  warm: Float64Array | null,
+  stats: KernelStats,
+): void {
+  const { nx, ny, width, height, time } = spec;
+  const [cx, cy, cz] = spec.center;
+  const [ux, uy, uz] = spec.u;
+  const [vx, vy, vz] = spec.v;
+  const { planes, mask, points, row0 } = target;
+  const oEx = 0;
+  const oEy = points;
+  const oEz = 2 * points;
+  const oBx = 3 * points;
+  const oBy = 4 * points;
+  const oBz = 5 * points;
+  const oRx = 6 * points;
+  const oRy = 7 * points;
+  const oRz = 8 * points;
+  const oDelay = 9 * points;
+  const chargeCount = charges.length;
+  // Per-charge warm start along the row: the left neighbour's delay and path piece.
+  const guesses = new Float64Array(chargeCount);
+  const previousGuesses = new Float64Array(chargeCount);
+  const firstOfRow = new Float64Array(chargeCount);
+  const hints = new Int32Array(chargeCount).fill(-1);
+  const near2 = nearRadius * nearRadius;
+  let iterations = 0;
+  let maxIterations = 0;
+  for (let j = j0; j < j1; j++) {
+    const b = ((j + 0.5) / ny - 0.5) * height;
+    // A row starts from the point below it when that was computed, else cold.
+    for (let k = 0; k < chargeCount; k++) guesses[k] = j > j0 ? firstOfRow[k] : Number.NaN;
+    for (let i = 0; i < nx; i++) {
+      const a = ((i + 0.5) / nx - 0.5) * width;
+      const rx = cx + a * ux + b * vx;
+      const ry = cy + a * uy + b * vy;
+      const rz = cz + a * uz + b * vz;
+      const p = (j - row0) * nx + i;
+      clearFields(sample);
+      let onCharge = false;
+      for (let k = 0; k < chargeCount; k++) {
+        const { charge, path } = charges[k];
+        // Linear extrapolation from the two left neighbours, or the previous frame's delay.
+        let guess = i >= 2 ? 2 * guesses[k] - previousGuesses[k] : guesses[k];
+        if (warm !== null) {
+          const previous = warm[k * points + p];
+          if (!Number.isNaN(previous)) guess = previous;
+        }
+        solveRetardedTime(path, rx, ry, rz, time, state, solution, guess, hints[k]);
+        hints[k] = solution.piece;
+        previousGuesses[k] = guesses[k];
+        guesses[k] = solution.delay;
+        if (warm !== null) warm[k * points + p] = solution.delay;
+        iterations += solution.iterations;
+        if (solution.iterations > maxIterations) maxIterations = solution.iterations;
+        if (k === 0) planes[oDelay + p] = solution.delay;
+        if (i === 0) firstOfRow[k] = solution.delay;
+        if (onCharge) continue;
+        const dx = rx - state.px;
+        const dy = ry - state.py;
+        const dz = rz - state.pz;
+        if (!(dx * dx + dy * dy + dz * dz > near2)) onCharge = true;
+        else if (!addLienardWiechert(charge, rx, ry, rz, state, sample)) onCharge = true;
+      }
+      if (onCharge) {
+        mask[p] = MASK_ON_CHARGE;
+        clearFields(sample);
+      } else {
+        mask[p] = MASK_CLEAR;
+      }
+      // Superposed in double precision above, rounded to float32 once here.
+      planes[oEx + p] = sample.ex;
+      planes[oEy + p] = sample.ey;
+      planes[oEz + p] = sample.ez;
+      planes[oBx + p] = sample.bx;
+      planes[oBy + p] = sample.by;
+      planes[oBz + p] = sample.bz;
+      planes[oRx + p] = sample.erx;
+      planes[oRy + p] = sample.ery;
+      planes[oRz + p] = sample.erz;
+    }
+  }
+  stats.points += (j1 - j0) * nx;
+  stats.iterations += iterations;
+  if (maxIterations > stats.maxIterations) stats.maxIterations = maxIterations;
+}
