@@ -79,7 +79,7 @@ export class SampledPath {
     for (let i = 1; i < n; i++) {
       if (!(t[i] > t[i - 1])) {
         throw new PathError(
-          `times must increase strictly: sample ${i} has t = ${t[i]} s after t = ${t[i - 1]} s`,
+          `times must increase strictly: sample ${i + 1} (counting from 1) has t = ${t[i]} s after t = ${t[i - 1]} s`,
           i,
           't',
         );
@@ -132,6 +132,25 @@ export class SampledPath {
     }
     let lo = 0;
     let hi = last;
+    if (hint >= 0 && hint < last) {
+      // Gallop out from the hint: O(log distance) when the answer is near, as it usually is.
+      let stride = 2;
+      if (time >= t[hint]) {
+        lo = hint;
+        while (lo + stride < last && t[lo + stride] <= time) {
+          lo += stride;
+          stride *= 2;
+        }
+        hi = Math.min(last, lo + stride);
+      } else {
+        hi = hint;
+        while (hi - stride > 0 && t[hi - stride] > time) {
+          hi -= stride;
+          stride *= 2;
+        }
+        lo = Math.max(0, hi - stride);
+      }
+    }
     while (hi - lo > 1) {
       const mid = (lo + hi) >>> 1;
       if (t[mid] <= time) lo = mid;
@@ -203,7 +222,7 @@ export class SampledPath {
       const speed = Math.hypot(this.vx[i], this.vy[i], this.vz[i]);
       if (!(speed < c)) {
         throw new PathError(
-          `speed reaches ${fraction(speed)} c at sample ${i} (t = ${this.t[i]} s); a charge must move slower than light`,
+          `speed reaches ${fraction(speed)} c at sample ${i + 1} (counting from 1; t = ${this.t[i]} s); a charge must move slower than light`,
           i,
           'v',
         );
@@ -218,7 +237,7 @@ export class SampledPath {
           const inner = Math.hypot(probe.vx, probe.vy, probe.vz);
           if (!(inner < c)) {
             throw new PathError(
-              `speed reaches ${fraction(inner)} c between samples ${i} and ${i + 1} (t = ${t0 + s * h} s); a charge must move slower than light`,
+              `speed reaches ${fraction(inner)} c between samples ${i + 1} and ${i + 2} (counting from 1; t = ${t0 + s * h} s); a charge must move slower than light`,
               i,
               'v',
             );
@@ -279,7 +298,11 @@ function copyColumn(values: ArrayLike<number>, n: number, name: string): Float64
   for (let i = 0; i < n; i++) {
     const value = values[i];
     if (!Number.isFinite(value)) {
-      throw new PathError(`sample ${i} has a non-finite ${name} (${value})`, i, name);
+      throw new PathError(
+        `sample ${i + 1} (counting from 1) has a non-finite ${name} (${value})`,
+        i,
+        name,
+      );
     }
     out[i] = value;
   }

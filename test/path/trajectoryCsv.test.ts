@@ -1,0 +1,119 @@
+import { describe, expect, it } from 'vitest';
+import { InputError } from '../../src/io/inputError';
+import { sampleMotion } from '../../src/path/analyticMotion';
+import { type PathState, pathState } from '../../src/path/pathState';
+import { circularOrbit } from '../../src/path/presets';
+import { SampledPath } from '../../src/path/sampledPath';
+import { parseTrajectory, readTrajectory } from '../../src/path/trajectoryCsv';
+
+/** The InputError that parsing `text` as beam.csv throws (fails when nothing is thrown). */
+function trajectoryError(text: string): InputError {
+  try {
+    parseTrajectory(text, 'beam.csv');
+  } catch (error) {
+    if (error instanceof InputError) return error;
+    throw error;
+  }
+  throw new Error('expected an InputError');
+}
+
+/** The state with -0 read as 0: CSV text drops the sign of zero. */
+function withoutSignedZero(state: PathState): PathState {
+  const out = { ...state };
+  for (const key of Object.keys(out) as (keyof PathState)[]) out[key] += 0;
+  return out;
+}
+
+const NAMES = ['t', 'x', 'y', 'z', 'vx', 'vy', 'vz', 'ax', 'ay', 'az'] as const;
+
+describe('parseTrajectory', () => {
+  it('builds the same path as the columns it was written from', () => {
+    const columns = sampleMotion(circularOrbit(0.5, 0.6), 0, 2e-9, 9);
+    const rows = [NAMES.join(',')];
+    for (let i = 0; i < 9; i++) {
+      rows.push(NAMES.map((name) => String(columns[name]![i])).join(','));
+    }
+    const fromCsv = parseTrajectory(`${rows.join('\n')}\n`, 'orbit.csv');
+    const direct = new SampledPath(columns);
+    const a = pathState();
+    const b = pathState();
+    for (const t of [-1e-9, 0, 3.3e-10, 1.7e-9, 5e-9]) {
+      fromCsv.stateAt(t, a);
+      direct.stateAt(t, b);
+      // Shortest round-trip printing makes the CSV lossless (but for the sign of zero), so
+      // the paths agree bit for bit.
+      expect(withoutSignedZero(a)).toEqual(withoutSignedZero(b));
+    }
+  });
+
+  it('takes columns in any order and fills missing derivatives from the spline', () => {
+    const path = parseTrajectory('z,y,x,t\n0,0,0,0\n0,0,1,1\n0,0,2,2\n', 'beam.csv');
+    expect([...path.x]).toEqual([0, 1, 2]);
+    // Positions on a straight line at 1 m/s: the spline's knot velocities are exact to rounding.
+    expect(path.vx[1]).toBeCloseTo(1, 12);
+    expect(path.ax[1]).toBeCloseTo(0, 12);
+  });
+
+  it('keeps given velocities and accelerations', () => {
+    const path = parseTrajectory(
+      't,x,y,z,vx,vy,vz,ax,ay,az\n0,0,0,0,1,2,3,4,5,6\n1,1,2,3,1,2,3,4,5,6\n',
+      'beam.csv',
+    );
+    expect([path.vy[0], path.az[1]]).toEqual([2, 6]);
+  });
+
+  it('names the file line and column of times that do not increase', () => {
+    const text = 't,x,y,z\n# start\n0,0,0,0\n\n1e-9,0,0,0\n# a gap\n1e-9,0,0,0\n';
+    const error = trajectoryError(text);
+    expect(error.message).toMatch(/^beam\.csv line 7, column "t": times must increase strictly/);
+    expect(error.line).toBe(7);
+    expect(error.column).toBe('t');
+  });
+
+  it('names the line of a sample moving faster than light', () => {
+    const rows = ['t,x,y,z,vx,vy,vz'];
+    for (let i = 0; i < 4; i++) rows.push(`${i * 1e-9},0,0,0,0,0,0`);
+    rows.push('# too fast');
+    rows.push('4e-9,0,0,0,299798454,0,0');
+    const error = trajectoryError(rows.join('\n'));
+    expect(error.message).toMatch(
+      /^beam\.csv line 7, columns "vx", "vy", "vz": speed reaches 1\.00002 c at sample 5 \(counting from 1/,
+    );
+    expect(error.line).toBe(7);
+  });
+
+  it('points at the positions when a spline velocity reaches light speed', () => {
+    const error = trajectoryError('t,x,y,z\n0,0,0,0\n1e-9,0.5,0,0\n');
+    expect(error.message).toMatch(/^beam\.csv line 2, columns "x", "y", "z": speed reaches /);
+    expect(error.message).toMatch(/velocities here come from a spline through x, y, z\)$/);
+  });
+
+  it('requires each derivative group whole', () => {
+    expect(trajectoryError('t,x,y,z,ax,az\n0,0,0,0,0,0\n').message).toBe(
+      'beam.csv line 1, column "ay": missing; ax, ay, az must be given together or not at all',
+    );
+  });
+
+  it('requires at least one sample', () => {
+    expect(trajectoryError('t,x,y,z\n').message).toBe(
+      'beam.csv: no samples: a trajectory needs at least one data row',
+    );
+  });
+
+  it('reports csv errors with the trajectory’s column names', () => {
+    expect(trajectoryError('t,x,y\n').message).toBe(
+      'beam.csv line 1: missing column "z"; header has t, x, y',
+    );
+    expect(trajectoryError('t,x,y,z,w\n').message).toBe(
+      'beam.csv line 1, column "w": unknown column; allowed: t, x, y, z, vx, vy, vz, ax, ay, az',
+    );
+  });
+});
+
+describe('readTrajectory', () => {
+  it('names a missing file', () => {
+    expect(() => readTrajectory('beam-that-is-not-here.csv')).toThrow(
+      'cannot read beam-that-is-not-here.csv: no such file',
+    );
+  });
+});
