@@ -24,18 +24,13 @@ const MAX_ITERATIONS = 200;
 const TAYLOR_FRACTION = 1e-6;
 
 /**
- * The time over which the motion changes appreciably near this state: the longer of the
- * piece's duration and |a|/|j| (for a smooth path the physical scale, e.g. 1/ω on an orbit).
+ * Duration of the path piece holding the state: the Taylor shortcut is kept to a tiny
+ * fraction of it, where the neglected snap term is bounded by the piece's own polynomial.
  * Unbounded outside the samples, where the motion is straight.
  */
-function motionTimescale(path: SampledPath, piece: number, s: PathState): number {
+function pieceDuration(path: SampledPath, piece: number): number {
   if (piece < 0 || piece >= path.count - 1) return Number.POSITIVE_INFINITY;
-  const h = path.t[piece + 1] - path.t[piece];
-  const a2 = s.ax * s.ax + s.ay * s.ay + s.az * s.az;
-  const j2 = s.jx * s.jx + s.jy * s.jy + s.jz * s.jz;
-  if (!(j2 > 0)) return h;
-  const physical = Math.sqrt(a2 / j2);
-  return physical > h ? physical : h;
+  return path.t[piece + 1] - path.t[piece];
 }
 
 /**
@@ -113,7 +108,7 @@ export function solveRetardedTime(
     // Nearly converged: the step is tiny against the piece, so a third-order Taylor update of
     // the state is exact to rounding (the neglected snap term is (step/h)² ≤ 1e-12 of the
     // acceleration change across the piece) and saves one more path evaluation.
-    if (Math.abs(step) <= TAYLOR_FRACTION * Math.min(tau, motionTimescale(path, piece, state))) {
+    if (Math.abs(step) <= TAYLOR_FRACTION * Math.min(tau, pieceDuration(path, piece))) {
       tau -= step;
       const dt = step;
       const half = 0.5 * dt;

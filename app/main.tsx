@@ -1,0 +1,17 @@
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { App } from './App';
+import { DEMO_SCENARIO_URL, openScenario } from './io/openScenario';
+import './styles.css';
+
+const root = document.getElementById('root');
+if (root === null) throw new Error('index.html has no #root element');
+
+// Started outside React so StrictMode's double effects cannot fetch twice.
+void openScenario(DEMO_SCENARIO_URL);
+
+createRoot(root).render(
+  <StrictMode>
+    <App />
+  </StrictMode>,
+);

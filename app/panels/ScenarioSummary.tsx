@@ -1,0 +1,36 @@
+import { useAppState } from '../hooks/useAppState';
+
+/** Title of the loaded scenario, whether it is invented, and its note; and why a load failed. */
+export function ScenarioSummary() {
+  const scenario = useAppState((s) => s.scenario);
+  const status = useAppState((s) => s.scenarioStatus);
+  const error = useAppState((s) => s.scenarioError);
+  const source = useAppState((s) => s.scenarioSource);
+  return (
+    <div className="scenario-summary">
+      {status === 'failed' && (
+        <p className="scenario-error" role="alert">
+          Could not open {source ?? 'the scenario'}: {error}
+          {scenario && ' (still showing the previous scenario)'}
+        </p>
+      )}
+      {scenario === null ? (
+        status === 'loading' && <p className="muted">Loading scenario…</p>
+      ) : (
+        <>
+          <div className="scenario-title-row">
+            <h2 className="scenario-title" data-testid="scenario-title">
+              {scenario.title}
+            </h2>
+            {scenario.invented ? (
+              <span className="badge badge-invented">Invented example</span>
+            ) : (
+              <span className="badge">Taken from a real setup</span>
+            )}
+          </div>
+          {scenario.note && <p className="scenario-note">{scenario.note}</p>}
+        </>
+      )}
+    </div>
+  );
+}

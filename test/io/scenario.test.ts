@@ -1,0 +1,272 @@
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import {
+  buildCharges,
+  parseScenario,
+  parseScenarioText,
+  type Scenario,
+  ScenarioError,
+  sliceSpecOf,
+} from '../../src/io/scenario';
+import { pathState } from '../../src/path/pathState';
+import { SPEED_OF_LIGHT } from '../../src/physics/constants';
+
+const c = SPEED_OF_LIGHT;
+
+function base(): Record<string, unknown> {
+  return {
+    format: 'conecast-scenario',
+    version: 1,
+    title: 'test',
+    invented: true,
+    note: '',
+    charges: [
+      {
+        label: 'e',
+        charge: -1.602176634e-19,
+        path: {
+          kind: 'preset',
+          preset: 'circularOrbit',
+          params: { radius: 0.01, beta: 0.5 },
+          from: 0,
+          to: 1e-9,
+          samples: 200,
+        },
+      },
+    ],
+    view: { plane: 'xy', center: [0, 0, 0], size: [0.2, 0.1], resolution: [40, 20], time: 5e-10 },
+  };
+}
+
+/** A copy of the base document with one nested field replaced (or removed when value is undefined). */
+function withField(path: (string | number)[], value: unknown): Record<string, unknown> {
+  const doc = structuredClone(base());
+  let node = doc as Record<string | number, unknown>;
+  for (const key of path.slice(0, -1)) node = node[key] as Record<string | number, unknown>;
+  const last = path[path.length - 1];
+  if (value === undefined) delete node[last];
+  else node[last] = value;
+  return doc;
+}
+
+function messageOf(input: unknown): string {
+  try {
+    parseScenario(input);
+  } catch (error) {
+    expect(error).toBeInstanceOf(ScenarioError);
+    const message = (error as Error).message;
+    expect(message).not.toContain('\n');
+    return message;
+  }
+  throw new Error('expected the scenario to be rejected');
+}
+
+describe('the demo scenario', () => {
+  const text = readFileSync(new URL('../../public/scenarios/demo.json', import.meta.url), 'utf8');
+
+  it('parses, is marked invented and says so in its note', () => {
+    const scenario = parseScenarioText(text);
+    expect(scenario.invented).toBe(true);
+    expect(scenario.note.toLowerCase()).toContain('invented');
+  });
+
+  it('builds one electron whose samples run past the view time', () => {
+    const scenario = parseScenarioText(text);
+    const charges = buildCharges(scenario);
+    expect(charges).toHaveLength(1);
+    expect(charges[0].charge).toBeLessThan(0);
+    const [t0, t1] = charges[0].path.timeSpan;
+    expect(t0).toBeLessThan(scenario.view.time);
+    expect(t1).toBeGreaterThan(scenario.view.time);
+    expect(charges[0].path.maxSpeed / c).toBeCloseTo(0.7, 6);
+  });
+});
+
+describe('parseScenario accepts', () => {
+  it('the base document, unchanged', () => {
+    const scenario: Scenario = parseScenario(base());
+    expect(scenario.charges[0].path.kind).toBe('preset');
+  });
+
+  it('a samples path with positions only', () => {
+    const doc = withField(['charges', 0, 'path'], {
+      kind: 'samples',
+      t: [0, 1, 2, 3],
+      x: [0, 1, 2, 3],
+      y: [0, 0, 0, 0],
+      z: [0, 0, 0, 0],
+    });
+    const [charge] = buildCharges(parseScenario(doc));
+    const s = pathState();
+    charge.path.stateAt(1.5, s);
+    expect(s.px).toBeCloseTo(1.5, 12);
+    expect(s.vx).toBeCloseTo(1, 12);
+  });
+});
+
+describe('parseScenario rejects, naming the field', () => {
+  it.each([
+    [['charges', 0, 'path', 'params', 'beta'], 1, 'charges[0].path.params.beta: must be below 1'],
+    [['charges', 0, 'path', 'params', 'beta'], 0, 'charges[0].path.params.beta: must be above 0'],
+    [
+      ['charges', 0, 'path', 'params', 'radius'],
+      -1,
+      'charges[0].path.params.radius: must be a positive length in m',
+    ],
+    [
+      ['charges', 0, 'path', 'params', 'beta'],
+      '0.5',
+      'charges[0].path.params.beta: must be a number',
+    ],
+    [
+      ['charges', 0, 'path', 'params', 'beta'],
+      undefined,
+      'charges[0].path.params.beta: is missing',
+    ],
+    [['charges', 0, 'path', 'samples'], 2.5, 'charges[0].path.samples: must be a whole number'],
+    [['charges', 0, 'path', 'samples'], 1, 'charges[0].path.samples: must be at least 2'],
+    [['charges', 0, 'path', 'to'], 0, 'charges[0].path.to: must be after from (0 s)'],
+    [['charges', 0, 'charge'], null, 'charges[0].charge: must be a number'],
+    [['charges'], [], 'charges: must hold at least one charge'],
+    [['title'], '', 'title: must not be empty'],
+    [['invented'], 'yes', 'invented: must be true or false'],
+    [['view', 'plane'], 'xw', 'view.plane: must be "xy" or "xz" or "yz"'],
+    [['view', 'size', 1], 0, 'view.size[1]: must be a positive length in m'],
+    [['view', 'resolution', 0], 10_000, 'view.resolution[0]: must be at most 8192'],
+    [['view', 'center'], [0, 0], 'view.center: must hold at least 3 values'],
+    [['view', 'time'], Number.NaN, 'view.time: must be a number'],
+    [['format'], 'something-else', 'format: must be "conecast-scenario"'],
+    [['version'], 2, 'version: 2 is not supported; this build reads version 1'],
+    [['version'], '1', 'version: must be 1'],
+  ])('%j = %j', (path, value, expected) => {
+    expect(messageOf(withField(path, value))).toBe(expected);
+  });
+
+  it('an unknown preset', () => {
+    const doc = withField(['charges', 0, 'path', 'preset'], 'spiral');
+    expect(messageOf(doc)).toBe(
+      'charges[0].path.preset: must be one of "circularOrbit", "uniformMotion", "lineOscillation", "constantProperAcceleration"',
+    );
+  });
+
+  it('an unknown path kind', () => {
+    const doc = withField(['charges', 0, 'path', 'kind'], 'table');
+    expect(messageOf(doc)).toBe('charges[0].path.kind: must be one of "preset", "samples"');
+  });
+
+  it('a misspelt parameter', () => {
+    const doc = withField(['charges', 0, 'path', 'params'], { raduis: 0.01, beta: 0.5 });
+    expect(messageOf(doc)).toMatch(/^charges\[0\]\.path\.params: unknown field "raduis"/);
+  });
+
+  it('an oscillation faster than light', () => {
+    const doc = withField(['charges', 0, 'path'], {
+      kind: 'preset',
+      preset: 'lineOscillation',
+      params: { amplitude: 0.1, frequency: c / (2 * Math.PI * 0.1) },
+      from: 0,
+      to: 1e-8,
+      samples: 100,
+    });
+    expect(messageOf(doc)).toBe(
+      'charges[0].path.params: peak speed 2π·frequency·amplitude must be below c',
+    );
+  });
+
+  it('sample columns of different lengths', () => {
+    const doc = withField(['charges', 0, 'path'], {
+      kind: 'samples',
+      t: [0, 1, 2],
+      x: [0, 1],
+      y: [0, 0, 0],
+      z: [0, 0, 0],
+    });
+    expect(messageOf(doc)).toBe('charges[0].path.x: has 2 values but t has 3');
+  });
+
+  it('half a velocity group', () => {
+    const doc = withField(['charges', 0, 'path'], {
+      kind: 'samples',
+      t: [0, 1],
+      x: [0, 1],
+      y: [0, 0],
+      z: [0, 0],
+      vx: [1, 1],
+    });
+    expect(messageOf(doc)).toBe('charges[0].path: vx, vy, vz must be given together');
+  });
+
+  it('text that is not JSON', () => {
+    expect(() => parseScenarioText('{ "format": ')).toThrow(/^scenario: not valid JSON/);
+  });
+});
+
+describe('buildCharges', () => {
+  it('samples each preset with the argument names of its function', () => {
+    const cases = [
+      { preset: 'uniformMotion', params: { beta: -0.5 }, speed: 0.5 * c },
+      {
+        preset: 'lineOscillation',
+        params: { amplitude: 0.01, frequency: 1e9 },
+        speed: 2e7 * Math.PI,
+      },
+      { preset: 'constantProperAcceleration', params: { alpha: 1e18 }, speed: 0 },
+      { preset: 'circularOrbit', params: { radius: 0.02, beta: 0.9 }, speed: 0.9 * c },
+    ];
+    for (const { preset, params, speed } of cases) {
+      const doc = withField(['charges', 0, 'path'], {
+        kind: 'preset',
+        preset,
+        params,
+        from: 0,
+        to: 1e-9,
+        samples: 101,
+      });
+      const [charge] = buildCharges(parseScenario(doc));
+      expect(charge.path.count).toBe(101);
+      const s = pathState();
+      charge.path.stateAt(0, s);
+      expect(Math.hypot(s.vx, s.vy, s.vz)).toBeCloseTo(speed, 0);
+    }
+  });
+
+  it('names the path of a sampled charge that outruns light', () => {
+    const doc = withField(['charges', 0, 'path'], {
+      kind: 'samples',
+      t: [0, 1e-9],
+      x: [0, 0.5],
+      y: [0, 0],
+      z: [0, 0],
+    });
+    const scenario = parseScenario(doc);
+    expect(() => buildCharges(scenario)).toThrow(/^charges\[0\]\.path: speed reaches 1\.66782 c/);
+  });
+
+  it('names the column of a sampled charge whose times do not increase', () => {
+    const doc = withField(['charges', 0, 'path'], {
+      kind: 'samples',
+      t: [0, 1, 1],
+      x: [0, 0, 0],
+      y: [0, 0, 0],
+      z: [0, 0, 0],
+    });
+    const scenario = parseScenario(doc);
+    expect(() => buildCharges(scenario)).toThrow(/^charges\[0\]\.path\.t: times must increase/);
+  });
+});
+
+describe('sliceSpecOf', () => {
+  it('maps a named plane, size and resolution', () => {
+    const spec = sliceSpecOf(parseScenario(withField(['view', 'plane'], 'xz')).view);
+    expect(spec).toEqual({
+      center: [0, 0, 0],
+      u: [1, 0, 0],
+      v: [0, 0, 1],
+      width: 0.2,
+      height: 0.1,
+      nx: 40,
+      ny: 20,
+      time: 5e-10,
+    });
+  });
+});
