@@ -58,9 +58,9 @@ function gridSpec(n: number): SliceSpec {
   };
 }
 
-/** Median of `repeats` timed runs after one warm-up. */
-async function timed(run: () => Promise<void> | void, repeats = 3): Promise<number> {
-  await run();
+/** Median of `repeats` timed runs after `warmups` untimed ones (workers need a dozen to JIT). */
+async function timed(run: () => Promise<void> | void, repeats = 5, warmups = 12): Promise<number> {
+  for (let w = 0; w < warmups; w++) await run();
   const times: number[] = [];
   for (let r = 0; r < repeats; r++) {
     const start = performance.now();
@@ -119,15 +119,15 @@ function kernelOnly(spec: SliceSpec, charges: Charge[]): number {
 }
 
 function timedSync(run: () => void): number {
-  run();
+  for (let w = 0; w < 4; w++) run();
   const times: number[] = [];
-  for (let r = 0; r < 3; r++) {
+  for (let r = 0; r < 5; r++) {
     const start = performance.now();
     run();
     times.push(performance.now() - start);
   }
   times.sort((a, b) => a - b);
-  return times[1];
+  return times[2];
 }
 
 function naive(spec: SliceSpec, charges: Charge[]): number {

@@ -81,9 +81,10 @@ export function computeSliceRows(
       let onCharge = false;
       for (let k = 0; k < chargeCount; k++) {
         const { charge, path } = charges[k];
-        // Linear extrapolation from the two left neighbours, or the previous frame's delay.
+        // Linear extrapolation from the two left neighbours; at a row's start, where there is
+        // none, the previous frame's delay here (measured better than the point below).
         let guess = i >= 2 ? 2 * guesses[k] - previousGuesses[k] : guesses[k];
-        if (warm !== null) {
+        if (i < 2 && warm !== null) {
           const previous = warm[k * points + p];
           if (!Number.isNaN(previous)) guess = previous;
         }

@@ -121,7 +121,7 @@ export function solveRetardedTime(
       state.ax += dt * state.jx;
       state.ay += dt * state.jy;
       state.az += dt * state.jz;
-      residual = c * tau - Math.hypot(rx - state.px, ry - state.py, rz - state.pz);
+      residual = c * tau - distance(rx - state.px, ry - state.py, rz - state.pz);
       break;
     }
     let next = tau - step;
@@ -129,12 +129,16 @@ export function solveRetardedTime(
     if (next === tau || hi - lo <= 2 * Number.EPSILON * hi) {
       tau = next;
       piece = path.stateAt(t - tau, state, piece);
-      residual = c * tau - Math.hypot(rx - state.px, ry - state.py, rz - state.pz);
+      residual = c * tau - distance(rx - state.px, ry - state.py, rz - state.pz);
       break;
     }
     tau = next;
   }
   return finish(out, tau, t - tau, piece, iterations, residual);
+}
+
+function distance(dx: number, dy: number, dz: number): number {
+  return Math.sqrt(dx * dx + dy * dy + dz * dz);
 }
 
 function finish(
