@@ -1,4 +1,4 @@
-import { planeOf, type SliceFields } from '../engine/slicePlanes';
+import { PLANE_UNITS, planeOf, type SliceFields } from '../engine/slicePlanes';
 import { VACUUM_PERMEABILITY } from '../physics/constants';
 
 /** What a slice export can hold, and the components each choice writes, in order. */
@@ -29,19 +29,10 @@ export type Quantity = keyof typeof QUANTITIES;
 export type Component = (typeof QUANTITIES)['all'][number];
 
 export const COMPONENT_UNITS: Record<Component, string> = {
-  Ex: 'V/m',
-  Ey: 'V/m',
-  Ez: 'V/m',
-  Bx: 'T',
-  By: 'T',
-  Bz: 'T',
-  Ex_rad: 'V/m',
-  Ey_rad: 'V/m',
-  Ez_rad: 'V/m',
+  ...PLANE_UNITS,
   Sx: 'W/m^2',
   Sy: 'W/m^2',
   Sz: 'W/m^2',
-  delay: 's',
   on_charge: '1',
 };
 
