@@ -3,9 +3,12 @@ import type { SliceSpec, Triple } from '../engine/sliceSpec';
 import { NAMED_PLANES } from '../engine/sliceSpec';
 import { type AnalyticMotion, sampleMotion } from '../path/analyticMotion';
 import {
+  brakingToRest,
   circularOrbit,
   constantProperAcceleration,
   lineOscillation,
+  transverseKick,
+  undulatorWiggle,
   uniformMotion,
 } from '../path/presets';
 import { PathError, SampledPath } from '../path/sampledPath';
@@ -75,6 +78,33 @@ const presetPathSchema = z.discriminatedUnion('preset', [
   presetPath(
     'constantProperAcceleration',
     z.strictObject({ alpha: positive('acceleration in m/s²') }),
+  ),
+  presetPath(
+    'brakingToRest',
+    z.strictObject({
+      beta0: speedFraction.refine((b) => b > 0, { error: 'must be above 0' }),
+      stopTime: positive('time in s'),
+    }),
+  ),
+  presetPath(
+    'undulatorWiggle',
+    z
+      .strictObject({
+        gamma: z.number().refine((g) => g > 1, { error: 'must be above 1' }),
+        strength: positive('undulator parameter K'),
+        period: positive('length in m'),
+      })
+      .refine(({ gamma, strength }) => strength * strength < 2 * (gamma * gamma - 1), {
+        error: 'K²/(2γ²) must stay below β² (raise gamma or lower strength)',
+      }),
+  ),
+  presetPath(
+    'transverseKick',
+    z.strictObject({
+      beta: speedFraction.refine((b) => b > 0, { error: 'must be above 0' }),
+      angle: z.number(),
+      duration: positive('time in s'),
+    }),
   ),
 ]);
 
@@ -245,6 +275,12 @@ function presetMotion(path: z.infer<typeof presetPathSchema>): AnalyticMotion {
       return lineOscillation(path.params.amplitude, path.params.frequency);
     case 'constantProperAcceleration':
       return constantProperAcceleration(path.params.alpha);
+    case 'brakingToRest':
+      return brakingToRest(path.params.beta0, path.params.stopTime);
+    case 'undulatorWiggle':
+      return undulatorWiggle(path.params.gamma, path.params.strength, path.params.period);
+    case 'transverseKick':
+      return transverseKick(path.params.beta, path.params.angle, path.params.duration);
   }
 }
 

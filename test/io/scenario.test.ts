@@ -145,7 +145,7 @@ describe('parseScenario rejects, naming the field', () => {
   it('an unknown preset', () => {
     const doc = withField(['charges', 0, 'path', 'preset'], 'spiral');
     expect(messageOf(doc)).toBe(
-      'charges[0].path.preset: must be one of "circularOrbit", "uniformMotion", "lineOscillation", "constantProperAcceleration"',
+      'charges[0].path.preset: must be one of "circularOrbit", "uniformMotion", "lineOscillation", "constantProperAcceleration", "brakingToRest", "undulatorWiggle", "transverseKick"',
     );
   });
 
@@ -268,5 +268,41 @@ describe('sliceSpecOf', () => {
       ny: 20,
       time: 5e-10,
     });
+  });
+});
+
+describe('the braking, undulator and kick presets in a scenario', () => {
+  const cases: [string, Record<string, number>, number, number][] = [
+    ['brakingToRest', { beta0: 0.8, stopTime: 2e-10 }, -1e-10, 4e-10],
+    ['undulatorWiggle', { gamma: 20, strength: 1.5, period: 0.02 }, 0, 2e-10],
+    ['transverseKick', { beta: 0.99, angle: 0.05, duration: 1e-10 }, -5e-11, 2e-10],
+  ];
+  for (const [preset, params, from, to] of cases) {
+    it(`builds a sub-luminal path for ${preset}`, () => {
+      const doc = withField(['charges', 0, 'path'], {
+        kind: 'preset',
+        preset,
+        params,
+        from,
+        to,
+        samples: 400,
+      });
+      const [charge] = buildCharges(parseScenario(doc));
+      expect(charge.path.count).toBe(400);
+      // The path model checks the speed at every knot and inside every piece.
+      expect(charge.path.maxSpeed).toBeLessThan(c);
+    });
+  }
+
+  it('refuses an undulator whose K leaves no forward speed', () => {
+    const doc = withField(['charges', 0, 'path'], {
+      kind: 'preset',
+      preset: 'undulatorWiggle',
+      params: { gamma: 1.5, strength: 3, period: 0.02 },
+      from: 0,
+      to: 1e-10,
+      samples: 50,
+    });
+    expect(messageOf(doc)).toMatch(/K²\/\(2γ²\) must stay below β²/);
   });
 });
