@@ -59,10 +59,7 @@ export function powerPerSolidAngleSourceTime(
   ny: number,
   nz: number,
 ): number {
-  const kappa = dopplerAndNumerator(s, nx, ny, nz);
-  return (
-    (q * q * scratch.numerator) / (16 * Math.PI * Math.PI * VACUUM_PERMITTIVITY * c * kappa ** 5)
-  );
+  return powerPerSolidAngle(q, s, nx, ny, nz, 5);
 }
 
 /**
@@ -76,9 +73,22 @@ export function powerPerSolidAngleObserverTime(
   ny: number,
   nz: number,
 ): number {
+  return powerPerSolidAngle(q, s, nx, ny, nz, 6);
+}
+
+/** q² |n × ((n - β) × β̇)|² / (16π² ε0 c κ^power): the two angular distributions differ only in the power of κ. */
+function powerPerSolidAngle(
+  q: number,
+  s: PathState,
+  nx: number,
+  ny: number,
+  nz: number,
+  power: 5 | 6,
+): number {
   const kappa = dopplerAndNumerator(s, nx, ny, nz);
   return (
-    (q * q * scratch.numerator) / (16 * Math.PI * Math.PI * VACUUM_PERMITTIVITY * c * kappa ** 6)
+    (q * q * scratch.numerator) /
+    (16 * Math.PI * Math.PI * VACUUM_PERMITTIVITY * c * kappa ** power)
   );
 }
 

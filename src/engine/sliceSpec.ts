@@ -41,29 +41,3 @@ export function slicePoint(spec: SliceSpec, i: number, j: number, target: Triple
   target[2] = spec.center[2] + a * spec.u[2] + b * spec.v[2];
   return target;
 }
-
-/** Returns a message naming the first thing wrong with a spec, or null when it is usable. */
-export function checkSliceSpec(spec: SliceSpec): string | null {
-  for (const key of ['center', 'u', 'v'] as const) {
-    const value = spec[key];
-    if (!Array.isArray(value) || value.length !== 3 || !value.every(Number.isFinite)) {
-      return `slice ${key} must be three finite numbers`;
-    }
-  }
-  const lu = Math.hypot(...spec.u);
-  const lv = Math.hypot(...spec.v);
-  if (Math.abs(lu - 1) > 1e-9 || Math.abs(lv - 1) > 1e-9)
-    return 'slice axes u and v must be unit vectors';
-  const dot = spec.u[0] * spec.v[0] + spec.u[1] * spec.v[1] + spec.u[2] * spec.v[2];
-  if (Math.abs(dot) > 1e-9) return 'slice axes u and v must be orthogonal';
-  if (!(spec.width > 0 && Number.isFinite(spec.width)))
-    return 'slice width must be a positive length in m';
-  if (!(spec.height > 0 && Number.isFinite(spec.height)))
-    return 'slice height must be a positive length in m';
-  if (!Number.isInteger(spec.nx) || spec.nx < 1 || spec.nx > 8192)
-    return 'slice nx must be a whole number from 1 to 8192';
-  if (!Number.isInteger(spec.ny) || spec.ny < 1 || spec.ny > 8192)
-    return 'slice ny must be a whole number from 1 to 8192';
-  if (!Number.isFinite(spec.time)) return 'slice time must be a finite number of seconds';
-  return null;
-}
