@@ -1,8 +1,60 @@
+import { InputError } from '../io/inputError';
+import { readTextFile } from '../io/readTextFile';
+import { buildCharges, parseScenarioText, type Scenario, ScenarioError } from '../io/scenario';
 import { readTrajectory } from '../path/trajectoryCsv';
 import type { Charge } from '../physics/charge';
 import type { ParsedArgs } from './args';
 import { UsageError } from './usageError';
 import { parseCharge } from './values';
+
+/** A scenario file named by --scenario, read, checked and built. */
+export interface LoadedScenario {
+  file: string;
+  scenario: Scenario;
+  /** The scenario's charges, in document order, each with its sampled path. */
+  charges: Charge[];
+}
+
+/**
+ * The scenario named by --scenario FILE.json, or undefined when the option is absent.
+ * Refuses --scenario together with --trajectory or --charge (a usage error, before any file
+ * is read). A file that is not a usable scenario is an InputError whose one-line message
+ * names the file and the field, e.g. `FILE.json: charges[0].path.params.beta: must be below 1`.
+ */
+export function readScenarioOption(args: ParsedArgs): LoadedScenario | undefined {
+  const file = args.one('scenario');
+  if (file === undefined) return undefined;
+  if (args.has('trajectory') || args.has('charge')) {
+    throw new UsageError(
+      'give the charges either with --scenario FILE.json or with --trajectory and --charge, not both',
+    );
+  }
+  const text = readTextFile(file);
+  try {
+    const scenario = parseScenarioText(text);
+    return { file, scenario, charges: buildCharges(scenario) };
+  } catch (error) {
+    if (error instanceof ScenarioError) throw new InputError(`${file}: ${error.message}`, file);
+    throw error;
+  }
+}
+
+/**
+ * The charges from --scenario FILE.json, or from repeated --trajectory FILE --charge Q pairs;
+ * `loaded` is the scenario already read by readScenarioOption, when the caller has it.
+ */
+export function readScenarioOrCharges(
+  args: ParsedArgs,
+  loaded: LoadedScenario | undefined = readScenarioOption(args),
+): Charge[] {
+  if (loaded !== undefined) return loaded.charges;
+  if (args.all('trajectory').length === 0 && args.all('charge').length === 0) {
+    throw new UsageError(
+      'give the charges with --scenario FILE.json, or at least one --trajectory FILE.csv with its --charge Q',
+    );
+  }
+  return readCharges(args);
+}
 
 /** The charges named by repeated --trajectory FILE --charge Q pairs, files read and checked. */
 export function readCharges(args: ParsedArgs): Charge[] {

@@ -2,6 +2,8 @@ import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { Writable } from 'node:stream';
+import { main } from '../../src/cli/main';
 import type { PathColumns } from '../../src/path/sampledPath';
 
 export interface CliRun {
@@ -55,4 +57,21 @@ export function trajectoryText(columns: PathColumns): string {
 export function outputRows(stdout: string): { header: string; rows: number[][] } {
   const [header, ...lines] = stdout.trimEnd().split('\n');
   return { header, rows: lines.map((line) => line.split(',').map(Number)) };
+}
+
+/** Runs `conecast <args>` in this process through main, capturing what it writes. */
+export async function runInProcess(args: readonly string[]): Promise<CliRun> {
+  const stdout = new Capture();
+  const stderr = new Capture();
+  const status = await main(args, { stdout, stderr });
+  return { status, stdout: stdout.text, stderr: stderr.text };
+}
+
+/** A stream that keeps what is written to it. */
+class Capture extends Writable {
+  text = '';
+  override _write(chunk: Buffer | string, _encoding: string, done: (error?: Error) => void): void {
+    this.text += chunk.toString();
+    done();
+  }
 }

@@ -54,7 +54,7 @@ describe('main', () => {
     const cases: [string[], string][] = [
       [
         ['fields', '--points', untimed],
-        'give at least one --trajectory FILE.csv with its --charge Q',
+        'give the charges with --scenario FILE.json, or at least one --trajectory FILE.csv with its --charge Q',
       ],
       [
         [

@@ -8,7 +8,7 @@ import { vec3 } from '../../physics/vec3';
 import { type OptionSpecs, type ParsedArgs, parseArgs } from '../args';
 import { type CliIo, type Command, EXIT_OK } from '../command';
 import { LineWriter } from '../output';
-import { readCharges } from '../readCharges';
+import { readScenarioOrCharges } from '../readCharges';
 import { UsageError } from '../usageError';
 import { parseNumberOption } from '../values';
 import { FIELDS_HELP, FIELDS_SUMMARY } from './fieldsHelp';
@@ -16,6 +16,7 @@ import { FIELDS_HELP, FIELDS_SUMMARY } from './fieldsHelp';
 const OPTIONS: OptionSpecs = {
   trajectory: { value: true, repeat: true },
   charge: { value: true, repeat: true },
+  scenario: { value: true },
   points: { value: true },
   time: { value: true },
   help: { value: false, short: 'h' },
@@ -37,7 +38,7 @@ interface FieldsRequest {
 
 async function runFields(argv: readonly string[], io: CliIo): Promise<number> {
   const request = parseRequest(argv);
-  const charges: Charge[] = readCharges(request.args);
+  const charges: Charge[] = readScenarioOrCharges(request.args);
   const points = readPoints(request.points);
   const ownTimes = points.optionalColumn('t');
   if (ownTimes !== undefined && request.time !== undefined) {

@@ -8,6 +8,7 @@ export const FIELDS_HELP = `conecast fields: ${FIELDS_SUMMARY}
 Usage:
   conecast fields --trajectory PATH.csv --charge Q [--trajectory P2.csv --charge Q2 ...]
                   --points POINTS.csv [--time T]
+  conecast fields --scenario FILE.json --points POINTS.csv [--time T]
 
 For every point, solves for the retarded time of each charge, evaluates its
 Liénard–Wiechert fields there, superposes the charges and writes one CSV row to
@@ -18,6 +19,10 @@ Options:
   --charge Q         charge in coulombs (C), one per --trajectory, in the same order;
                      e or -e stand for plus or minus the elementary charge
                      (1.602176634e-19 C), as in --charge -e
+  --scenario FILE    take the charges and their paths from a Conecast scenario (JSON)
+                     instead of --trajectory and --charge (not together with them);
+                     its view is not used here, so the times still come from --time
+                     or the points CSV
   --points FILE      observation points (points CSV below)
   --time T           observation time in seconds (s) for every point: required when
                      the points CSV has no t column, refused when it has one
@@ -59,9 +64,12 @@ order, every number at full double precision:
                    as 0), else 0
 
 Exit status: 0 on success; 2 for a usage or input error, reported as one line on
-standard error naming the file, line and column; 1 for an internal error.
+standard error naming the file, line and column (for a scenario, the file and the
+field, as in "s.json: charges[0].path.params.beta: must be below 1"); 1 for an
+internal error.
 
 Example:
   conecast fields --trajectory beam.csv --charge -e --points grid.csv --time 1e-9 \\
     > fields.csv
+  conecast fields --scenario orbit.json --points grid.csv --time 1e-9 > fields.csv
 `;

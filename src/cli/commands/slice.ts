@@ -1,13 +1,14 @@
 import { availableParallelism } from 'node:os';
 import { computeSlice, defaultNearRadius } from '../../engine/computeSlice';
 import { createNodeSlicePool } from '../../engine/node/nodeSlicePool';
+import type { ScenarioView } from '../../io/scenario';
 import { isQuantity, QUANTITIES } from '../../io/sliceQuantities';
 import { sliceToCsv, sliceToJson, sliceToNpy } from '../../io/sliceWriters';
 import type { Charge } from '../../physics/charge';
 import { type OptionSpecs, parseArgs } from '../args';
 import { writeFileAtomic } from '../atomicWrite';
 import { type CliIo, type Command, EXIT_OK } from '../command';
-import { readCharges } from '../readCharges';
+import { readScenarioOption, readScenarioOrCharges } from '../readCharges';
 import { sliceGeometry } from '../sliceOptions';
 import { UsageError } from '../usageError';
 import { parseNumberOption } from '../values';
@@ -46,8 +47,13 @@ async function runSlice(argv: readonly string[], io: CliIo): Promise<number> {
       `unexpected argument "${args.positionals[0]}"; see "conecast slice --help"`,
     );
   }
+  // A scenario's view supplies the geometry and time the command line leaves out.
+  const loaded = readScenarioOption(args);
+  const defaults: Partial<Record<string, string>> =
+    loaded === undefined ? {} : viewOptions(loaded.scenario.view);
+  const given = (name: string) => args.one(name) ?? defaults[name];
   const need = (name: string, what: string) => {
-    const value = args.one(name);
+    const value = given(name);
     if (value === undefined)
       throw new UsageError(`give ${what} with --${name}; see "conecast slice --help"`);
     return value;
@@ -59,7 +65,7 @@ async function runSlice(argv: readonly string[], io: CliIo): Promise<number> {
   );
   const spec = sliceGeometry(
     need('plane', 'the plane'),
-    args.one('center'),
+    given('center'),
     need('size', 'the extent W,H in m'),
     need('res', 'the grid NX,NY'),
     time,
@@ -91,7 +97,7 @@ async function runSlice(argv: readonly string[], io: CliIo): Promise<number> {
       : parseNumberOption(nearText, '--near-radius', 'a length in m');
   if (!(nearRadius >= 0))
     throw new UsageError(`option --near-radius needs a length of 0 m or more, got "${nearText}"`);
-  const charges: Charge[] = readCharges(args);
+  const charges: Charge[] = readScenarioOrCharges(args, loaded);
 
   const { fields, ms, usedThreads } = await compute(spec, charges, threads, nearRadius);
   if (format === 'npy') {
@@ -114,6 +120,20 @@ async function runSlice(argv: readonly string[], io: CliIo): Promise<number> {
     io.stderr.write(`${JSON.stringify(stats)}\n`);
   }
   return EXIT_OK;
+}
+
+/**
+ * A scenario view as the option texts it stands for. Numbers print in shortest round-trip
+ * form and the option parser rounds correctly, so each reads back as the same double.
+ */
+function viewOptions(view: ScenarioView): Partial<Record<string, string>> {
+  return {
+    time: String(view.time),
+    plane: view.plane,
+    center: view.center.join(','),
+    size: view.size.join(','),
+    res: view.resolution.join(','),
+  };
 }
 
 async function compute(

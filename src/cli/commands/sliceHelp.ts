@@ -10,6 +10,8 @@ Usage:
                  --time T --plane xy|xz|yz|ORIGIN;U;V --center X,Y,Z --size W,H
                  --res NX,NY --out FILE.npy|FILE.csv|FILE.json
                  [--quantity E|B|S|Erad|all] [--stats] [--threads N] [--near-radius R]
+  conecast slice --scenario FILE.json --out FILE.npy|FILE.csv|FILE.json
+                 [--time T] [--plane P] [--center X,Y,Z] [--size W,H] [--res NX,NY] ...
 
 Computes the Liénard–Wiechert fields of the charges on an NX x NY grid of cell
 centres covering W x H metres of a plane, at observation time T, using one worker
@@ -17,6 +19,11 @@ thread per core, and writes them to FILE (the format follows its extension).
 
 Options:
   --trajectory, --charge   as for "conecast fields" (trajectory CSV, charge in C or e/-e)
+  --scenario FILE the charges from a Conecast scenario (JSON) instead of --trajectory
+                  and --charge (not together with them); its view gives the defaults
+                  for --time, --plane, --center, --size and --res, and any of these
+                  given on the command line wins (a view centre is moved onto a custom
+                  --plane like --center)
   --time T        observation time, s
   --plane P       xy, xz or yz (axes u,v = x,y / x,z / y,z), or ORIGIN;U;V: the plane
                   through ORIGIN spanned by U and V (each X,Y,Z; normalised; must be
