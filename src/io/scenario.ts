@@ -2,6 +2,7 @@ import { z } from 'zod';
 import type { SliceSpec, Triple } from '../engine/sliceSpec';
 import { NAMED_PLANES } from '../engine/sliceSpec';
 import { type AnalyticMotion, sampleMotion } from '../path/analyticMotion';
+import { compileMotion, ExpressionError, expressionColumns } from '../path/expressionPath';
 import {
   brakingToRest,
   circularOrbit,
@@ -12,6 +13,7 @@ import {
   uniformMotion,
 } from '../path/presets';
 import { PathError, SampledPath } from '../path/sampledPath';
+import { checkSketch, MAX_SKETCH_CONTROLS, SketchError, sketchColumns } from '../path/sketchPath';
 import type { Charge } from '../physics/charge';
 import { SPEED_OF_LIGHT } from '../physics/constants';
 
@@ -152,7 +154,70 @@ const samplesPathSchema = z
     }
   });
 
-const pathSchema = z.discriminatedUnion('kind', [presetPathSchema, samplesPathSchema]);
+const triple = z.tuple([z.number(), z.number(), z.number()]);
+
+const sketchSpeedSchema = z.discriminatedUnion('kind', [
+  z.strictObject({ kind: z.literal('constant'), beta: z.number() }),
+  /** β changes linearly in time from betaStart to betaEnd over the whole curve. */
+  z.strictObject({ kind: z.literal('ramp'), betaStart: z.number(), betaEnd: z.number() }),
+]);
+
+const sketchPathSchema = z
+  .strictObject({
+    kind: z.literal('sketch'),
+    /** Points the curve passes through, m. */
+    controls: z.array(triple).min(2).max(MAX_SKETCH_CONTROLS),
+    speed: sketchSpeedSchema,
+    /** Time the charge leaves the first point, s. */
+    startTime: z.number(),
+    /** Number of evenly spaced samples from start to end of the curve. */
+    samples: z.int().min(2).max(MAX_PATH_SAMPLES),
+  })
+  .superRefine((path, ctx) => {
+    try {
+      checkSketch(path.controls, path.speed, path.startTime, path.samples);
+    } catch (error) {
+      if (!(error instanceof SketchError)) throw error;
+      ctx.addIssue({ code: 'custom', path: sketchIssuePath(error), message: error.message });
+    }
+  });
+
+const expressionPathSchema = z
+  .strictObject({
+    kind: z.literal('expression'),
+    /** Position formulas in t (s), giving m. */
+    x: z.string(),
+    y: z.string(),
+    z: z.string(),
+    /** First sample time, s. */
+    from: z.number(),
+    /** Last sample time, s. */
+    to: z.number(),
+    /** Number of evenly spaced samples on [from, to]. */
+    samples: z.int().min(2).max(MAX_PATH_SAMPLES),
+  })
+  .superRefine((path, ctx) => {
+    if (!(path.to > path.from)) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['to'],
+        message: `must be after from (${path.from} s)`,
+      });
+    }
+    try {
+      compileMotion(path);
+    } catch (error) {
+      if (!(error instanceof ExpressionError)) throw error;
+      ctx.addIssue({ code: 'custom', path: [error.field], message: error.detail });
+    }
+  });
+
+const pathSchema = z.discriminatedUnion('kind', [
+  presetPathSchema,
+  samplesPathSchema,
+  sketchPathSchema,
+  expressionPathSchema,
+]);
 
 const chargeSchema = z.strictObject({
   label: z.string().min(1),
@@ -161,7 +226,6 @@ const chargeSchema = z.strictObject({
   path: pathSchema,
 });
 
-const triple = z.tuple([z.number(), z.number(), z.number()]);
 const gridSide = z.int().min(1).max(MAX_GRID_SIDE);
 
 const viewSchema = z.strictObject({
@@ -204,6 +268,9 @@ export type ScenarioCharge = Scenario['charges'][number];
 export type ScenarioPath = ScenarioCharge['path'];
 export type ScenarioView = Scenario['view'];
 export type PresetName = z.infer<typeof presetPathSchema>['preset'];
+export type ScenarioSketchPath = z.infer<typeof sketchPathSchema>;
+export type ScenarioSketchSpeed = ScenarioSketchPath['speed'];
+export type ScenarioExpressionPath = z.infer<typeof expressionPathSchema>;
 
 /** Checks an already parsed JSON value; throws a ScenarioError naming the first bad field. */
 export function parseScenario(input: unknown): Scenario {
@@ -253,15 +320,45 @@ export function sliceSpecOf(view: ScenarioView): SliceSpec {
 
 function buildPath(path: ScenarioPath, where: string): SampledPath {
   try {
-    if (path.kind === 'samples') return new SampledPath(path);
-    return new SampledPath(sampleMotion(presetMotion(path), path.from, path.to, path.samples));
+    switch (path.kind) {
+      case 'samples':
+        return new SampledPath(path);
+      case 'preset':
+        return new SampledPath(sampleMotion(presetMotion(path), path.from, path.to, path.samples));
+      case 'sketch':
+        return new SampledPath(
+          sketchColumns(path.controls, path.speed, path.startTime, path.samples),
+        );
+      case 'expression':
+        return new SampledPath(expressionColumns(path, path.from, path.to, path.samples));
+    }
   } catch (error) {
     if (error instanceof PathError) {
       // Speed errors concern the whole path ('v'); the others name a real column.
       const column = path.kind === 'samples' && error.column !== 'v' ? `.${error.column}` : '';
       throw new ScenarioError(where + column, error.message);
     }
+    if (error instanceof SketchError) {
+      throw new ScenarioError(`${where}.${fieldPath(sketchIssuePath(error))}`, error.message);
+    }
+    if (error instanceof ExpressionError) {
+      throw new ScenarioError(`${where}.${error.field}`, error.detail);
+    }
     throw error;
+  }
+}
+
+/** Where in a sketch path a SketchError points: speed.beta, controls[3], samples, ... */
+function sketchIssuePath(error: SketchError): (string | number)[] {
+  switch (error.field) {
+    case 'beta':
+    case 'betaStart':
+    case 'betaEnd':
+      return ['speed', error.field];
+    case 'controls':
+      return error.index === undefined ? ['controls'] : ['controls', error.index];
+    default:
+      return [error.field];
   }
 }
 

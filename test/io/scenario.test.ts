@@ -151,7 +151,9 @@ describe('parseScenario rejects, naming the field', () => {
 
   it('an unknown path kind', () => {
     const doc = withField(['charges', 0, 'path', 'kind'], 'table');
-    expect(messageOf(doc)).toBe('charges[0].path.kind: must be one of "preset", "samples"');
+    expect(messageOf(doc)).toBe(
+      'charges[0].path.kind: must be one of "preset", "samples", "sketch", "expression"',
+    );
   });
 
   it('a misspelt parameter', () => {
@@ -304,5 +306,160 @@ describe('the braking, undulator and kick presets in a scenario', () => {
       samples: 50,
     });
     expect(messageOf(doc)).toMatch(/K²\/\(2γ²\) must stay below β²/);
+  });
+});
+
+const sketchPath = (
+  speed: Record<string, unknown>,
+  controls: unknown = circleControls(0.02, 9),
+) => ({
+  kind: 'sketch',
+  controls,
+  speed,
+  startTime: -1e-10,
+  samples: 400,
+});
+
+/** Points on a half circle of radius R in the xy plane. */
+function circleControls(radius: number, count: number): [number, number, number][] {
+  return Array.from({ length: count }, (_, i) => {
+    const angle = (Math.PI * i) / (count - 1);
+    return [radius * Math.cos(angle), radius * Math.sin(angle), 0];
+  });
+}
+
+const expressionPath = (x: string, y = '0', z = '0') => ({
+  kind: 'expression',
+  x,
+  y,
+  z,
+  from: 0,
+  to: 1e-9,
+  samples: 500,
+});
+
+describe('sketch and expression paths in a scenario', () => {
+  it('builds a sketch travelled at constant β, starting at its start time', () => {
+    const doc = withField(['charges', 0, 'path'], sketchPath({ kind: 'constant', beta: 0.6 }));
+    const scenario = parseScenario(doc);
+    expect(scenario.charges[0].path.kind).toBe('sketch');
+    const [charge] = buildCharges(scenario);
+    expect(charge.path.count).toBe(400);
+    expect(charge.path.timeSpan[0]).toBe(-1e-10);
+    // The sketch's own speed is βc exactly; SampledPath's interpolation adds well under 1e-6.
+    expect(charge.path.maxSpeed / c).toBeCloseTo(0.6, 6);
+  });
+
+  it('builds a sketch on a ramp, ending at betaEnd', () => {
+    const doc = withField(
+      ['charges', 0, 'path'],
+      sketchPath({ kind: 'ramp', betaStart: 0.1, betaEnd: 0.9 }),
+    );
+    const [charge] = buildCharges(parseScenario(doc));
+    const s = pathState();
+    charge.path.stateAt(charge.path.timeSpan[1], s);
+    // The last sample's velocity is βc·tangent from closed forms: rounding only.
+    expect(Math.hypot(s.vx, s.vy, s.vz) / c).toBeCloseTo(0.9, 12);
+  });
+
+  it('builds an expression path whose positions are the formulas', () => {
+    const doc = withField(['charges', 0, 'path'], expressionPath('0.01*cos(2*pi*1e8*t)', 'c*t/10'));
+    const [charge] = buildCharges(parseScenario(doc));
+    const s = pathState();
+    charge.path.stateAt(0, s);
+    expect(s.px).toBe(0.01);
+    // y = ct/10 is linear, which the spline reproduces up to rounding.
+    expect(s.vy / c).toBeCloseTo(0.1, 9);
+  });
+
+  it.each([
+    [
+      { kind: 'constant', beta: 1 },
+      'speed.beta: must be below 1: no charge reaches the speed of light',
+    ],
+    [{ kind: 'constant', beta: 0 }, 'speed.beta: must be above 0'],
+    [
+      { kind: 'ramp', betaStart: 0.5, betaEnd: 1.2 },
+      'speed.betaEnd: must be below 1: no charge reaches the speed of light',
+    ],
+    [{ kind: 'warp', beta: 0.5 }, 'speed.kind: must be one of "constant", "ramp"'],
+    [{ kind: 'constant', beta: 0.5, gamma: 2 }, 'speed: unknown field "gamma"'],
+  ])('refuses the sketch speed %j, naming the field', (speed, expected) => {
+    const doc = withField(['charges', 0, 'path'], sketchPath(speed));
+    expect(messageOf(doc)).toBe(`charges[0].path.${expected}`);
+  });
+
+  it('refuses sketch controls that cannot make a curve', () => {
+    const repeated = withField(
+      ['charges', 0, 'path'],
+      sketchPath({ kind: 'constant', beta: 0.5 }, [
+        [0, 0, 0],
+        [1, 0, 0],
+        [1, 0, 0],
+      ]),
+    );
+    expect(messageOf(repeated)).toBe(
+      'charges[0].path.controls[2]: repeats point 2 (counting from 1); consecutive points must differ',
+    );
+    const single = withField(
+      ['charges', 0, 'path'],
+      sketchPath({ kind: 'constant', beta: 0.5 }, [[0, 0, 0]]),
+    );
+    expect(messageOf(single)).toBe('charges[0].path.controls: must hold at least 2 values');
+    const flat = withField(
+      ['charges', 0, 'path'],
+      sketchPath({ kind: 'constant', beta: 0.5 }, [
+        [0, 0],
+        [1, 0],
+      ]),
+    );
+    expect(messageOf(flat)).toBe('charges[0].path.controls[0]: must hold at least 3 values');
+    const many = withField(
+      ['charges', 0, 'path'],
+      sketchPath({ kind: 'constant', beta: 0.5 }, circleControls(1, 201)),
+    );
+    expect(messageOf(many)).toBe('charges[0].path.controls: must hold at most 200 values');
+  });
+
+  it('buildCharges names the field of a sketch that skipped parsing', () => {
+    // A document assembled in code, not parsed: buildCharges must still refuse β ≥ 1 and say where.
+    const scenario = parseScenario(base());
+    const unchecked = {
+      ...scenario,
+      charges: [{ ...scenario.charges[0], path: sketchPath({ kind: 'constant', beta: 1 }) }],
+    } as Scenario;
+    expect(() => buildCharges(unchecked)).toThrow(
+      'charges[0].path.speed.beta: must be below 1: no charge reaches the speed of light',
+    );
+  });
+
+  it('names the charge and formula of an unknown symbol', () => {
+    const doc = structuredClone(base()) as { charges: Record<string, unknown>[] };
+    doc.charges.push({ label: 'p', charge: 1.602176634e-19, path: expressionPath('foo * t') });
+    expect(messageOf(doc)).toBe('charges[1].path.x: unknown symbol "foo"');
+  });
+
+  it.each([
+    [expressionPath('0', 'cos(t))'), 'charges[0].path.y: unexpected ")" at character 7'],
+    [expressionPath('0', '0', 'import({}, {})'), 'charges[0].path.z: unknown function "import"'],
+    [{ ...expressionPath('t'), to: 0 }, 'charges[0].path.to: must be after from (0 s)'],
+    [{ ...expressionPath('t'), samples: 1 }, 'charges[0].path.samples: must be at least 2'],
+    [{ ...expressionPath('t'), x: 5 }, 'charges[0].path.x: must be text'],
+  ])('refuses the expression path %j', (path, expected) => {
+    expect(messageOf(withField(['charges', 0, 'path'], path))).toBe(expected);
+  });
+
+  it('buildCharges names the formula and time of a value that is not real', () => {
+    const doc = withField(['charges', 0, 'path'], expressionPath('sqrt(t - 5e-10) * 1e-3'));
+    const scenario = parseScenario(doc);
+    expect(() => buildCharges(scenario)).toThrow(
+      'charges[0].path.x: is a complex number, not a real one (at t = 0 s)',
+    );
+  });
+
+  it('buildCharges names the path of a formula that outruns light', () => {
+    const doc = withField(['charges', 0, 'path'], expressionPath('2*c*t'));
+    const scenario = parseScenario(doc);
+    expect(() => buildCharges(scenario)).toThrow(/^charges\[0\]\.path: speed reaches 2\.00000 c/);
   });
 });
