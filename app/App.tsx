@@ -1,15 +1,27 @@
 import { useRef, useState } from 'react';
-import { useFieldMap } from './hooks/useFieldMap';
+import { useAppState } from './hooks/useAppState';
+import { useDisplayedMap } from './hooks/useDisplayedMap';
+import { useShortcuts } from './hooks/useShortcuts';
+import { downloadScenario } from './io/scenarioDocument';
 import { CAUTIONS_ID, Cautions } from './panels/Cautions';
+import { ChargesPanel } from './panels/ChargesPanel';
 import { ColourBar } from './panels/ColourBar';
 import { MapLegend } from './panels/MapLegend';
+import { MapPanel } from './panels/MapPanel';
+import { ProbesPanel } from './panels/ProbesPanel';
 import { Readouts } from './panels/Readouts';
 import { ScenarioSummary } from './panels/ScenarioSummary';
-import { TimeControl } from './panels/TimeControl';
+import { TimeBar } from './panels/TimeBar';
+import { Toolbar } from './panels/Toolbar';
+import { appStore } from './store/appStore';
 import { FieldView } from './view/FieldView';
 
 export function App() {
-  const fieldMap = useFieldMap();
+  useShortcuts();
+  const shown = useDisplayedMap();
+  const fieldError = useAppState((s) => s.fieldError);
+  const fieldFault = useAppState((s) => s.fieldFault);
+  const hasScenario = useAppState((s) => s.scenario !== null);
   const [cautionsOpen, setCautionsOpen] = useState(true);
   const cautionsToggle = useRef<HTMLButtonElement>(null);
 
@@ -18,6 +30,14 @@ export function App() {
       <header className="app-header">
         <h1 className="app-name">Conecast</h1>
         <span className="app-tagline">retarded-time fields of moving point charges</span>
+        <button
+          type="button"
+          className="header-button header-plain"
+          disabled={!hasScenario}
+          onClick={() => downloadScenario(appStore.getState())}
+        >
+          Save scenario
+        </button>
         <button
           ref={cautionsToggle}
           type="button"
@@ -37,23 +57,40 @@ export function App() {
         }}
       />
       <main className="workspace">
-        <ScenarioSummary />
-        <div className="workspace-body">
+        <aside className="side-panel side-left" aria-label="Charges and paths">
+          <ChargesPanel />
+        </aside>
+        <div className="centre-column">
+          <ScenarioSummary />
+          <Toolbar />
           <div className="field-area">
-            <FieldView state={fieldMap} />
-            <ColourBar range={fieldMap.map?.colourRange ?? null} />
+            <FieldView />
+            <ColourBar shown={shown} />
           </div>
-          <aside className="side-panel" aria-label="Slice details">
-            <TimeControl />
-            <Readouts map={fieldMap.map} />
-            {fieldMap.error && (
-              <p className="scenario-error" role="alert">
-                The field could not be computed: {fieldMap.error}
-              </p>
-            )}
-            <MapLegend />
-          </aside>
+          <TimeBar />
         </div>
+        <aside className="side-panel side-right" aria-label="Probes, map and slice details">
+          <ProbesPanel />
+          <MapPanel />
+          {fieldError && (
+            <p className="scenario-error" role="alert">
+              The field could not be computed: {fieldError}
+            </p>
+          )}
+          {fieldFault && (
+            <p className="field-problem" role="status">
+              A field worker failed and was replaced; its part of the map was computed again (
+              {fieldFault}).
+            </p>
+          )}
+          <section className="panel" aria-labelledby="slice-details-title">
+            <h2 id="slice-details-title" className="panel-title">
+              Slice details
+            </h2>
+            <Readouts shown={shown} />
+            <MapLegend />
+          </section>
+        </aside>
       </main>
     </div>
   );

@@ -1,13 +1,18 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './App';
+import { startFieldEngine } from './engine/fieldEngine';
+import { startPlayback } from './engine/playback';
 import { DEMO_SCENARIO_URL, openScenario } from './io/openScenario';
+import { appStore } from './store/appStore';
 import './styles.css';
 
 const root = document.getElementById('root');
 if (root === null) throw new Error('index.html has no #root element');
 
-// Started outside React so StrictMode's double effects cannot fetch twice.
+// Started outside React so StrictMode's double effects cannot fetch twice or make two pools.
+startFieldEngine(appStore);
+startPlayback(appStore);
 void openScenario(DEMO_SCENARIO_URL);
 
 createRoot(root).render(

@@ -1,25 +1,8 @@
-import { useMemo } from 'react';
-import { NAMED_PLANES, type SliceSpec } from '../../src/engine/sliceSpec';
+import type { SliceSpec } from '../../src/engine/sliceSpec';
+import { selectSliceSpec } from '../store/sliceSpecOf';
 import { useAppState } from './useAppState';
 
-/** The slice the view and time slices describe. */
+/** The slice now in view (its map may still be on its way). */
 export function useSliceSpec(): SliceSpec {
-  const plane = useAppState((s) => s.plane);
-  const center = useAppState((s) => s.center);
-  const size = useAppState((s) => s.size);
-  const resolution = useAppState((s) => s.resolution);
-  const time = useAppState((s) => s.time);
-  return useMemo(() => {
-    const axes = NAMED_PLANES[plane];
-    return {
-      center,
-      u: axes.u,
-      v: axes.v,
-      width: size[0],
-      height: size[1],
-      nx: resolution[0],
-      ny: resolution[1],
-      time,
-    };
-  }, [plane, center, size, resolution, time]);
+  return useAppState(selectSliceSpec);
 }

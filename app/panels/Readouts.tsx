@@ -1,33 +1,33 @@
-import type { FieldMap } from '../field/fieldMap';
+import type { DisplayedMap } from '../field/displayedMap';
 import { formatLength } from '../format/lengthUnit';
 import { formatSI } from '../format/siFormat';
 import { axisName } from '../view/sliceCoordinates';
 
-/** The numbers behind the picture: time, slice, grid, field range and cost. */
-export function Readouts({ map }: { map: FieldMap | null }) {
-  if (map === null) return <p className="muted">No field map yet.</p>;
-  const { spec, range, stats } = map;
+/** The numbers behind the picture: time, slice, grid, range of the quantity shown, and cost. */
+export function Readouts({ shown }: { shown: DisplayedMap | null }) {
+  if (shown === null) return <p className="muted">No field map yet.</p>;
+  const { map, quantity } = shown;
+  const { spec, stats } = map;
   const plane = `${axisName(spec.u)}${axisName(spec.v)}`;
+  const range = quantity.dataRange;
   return (
     <dl className="readouts">
       <dt>Map time</dt>
       <dd>t = {formatSI(spec.time, 's', 4)}</dd>
       <dt>Slice</dt>
       <dd>
-        {plane} plane, {formatLength(spec.width)} × {formatLength(spec.height)}, centred{' '}
-        {spec.center.every((c) => c === 0)
-          ? 'on the origin'
-          : `at (${spec.center.map(formatLength).join(', ')})`}
+        {plane} plane, {formatLength(spec.width)} × {formatLength(spec.height)}, centred at (
+        {spec.center.map((c) => formatLength(c)).join(', ')})
       </dd>
       <dt>Grid</dt>
       <dd>
         {spec.nx} × {spec.ny} points, cell {formatLength(spec.width / spec.nx)}
         {map.coarse && ' (coarse first pass)'}
       </dd>
-      <dt>|E| on the slice</dt>
+      <dt>{quantity.label} on the slice</dt>
       <dd data-testid="field-range">
         {range
-          ? `${formatSI(range.min, 'V/m')} to ${formatSI(range.max, 'V/m')}`
+          ? `${formatSI(range.min + quantity.offset, quantity.unit)} to ${formatSI(range.max + quantity.offset, quantity.unit)}`
           : 'zero everywhere'}
       </dd>
       <dt>Masked points</dt>

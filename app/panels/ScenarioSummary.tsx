@@ -6,6 +6,7 @@ export function ScenarioSummary() {
   const status = useAppState((s) => s.scenarioStatus);
   const error = useAppState((s) => s.scenarioError);
   const source = useAppState((s) => s.scenarioSource);
+  const edited = useAppState((s) => s.scenario !== s.openedScenario);
   return (
     <div className="scenario-summary">
       {status === 'failed' && (
@@ -22,6 +23,7 @@ export function ScenarioSummary() {
             <h2 className="scenario-title" data-testid="scenario-title">
               {scenario.title}
             </h2>
+            {edited && <span className="badge">edited since opened</span>}
             {scenario.invented ? (
               <span className="badge badge-invented">Invented example</span>
             ) : (

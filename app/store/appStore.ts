@@ -1,12 +1,29 @@
 import { createStore } from 'zustand/vanilla';
 import type { AppState } from './appState';
+import { createDisplaySlice } from './displaySlice';
+import { createFieldSlice } from './fieldSlice';
+import { createHistorySlice } from './historySlice';
+import { createProbesSlice } from './probesSlice';
 import { createScenarioSlice } from './scenarioSlice';
 import { createTimeSlice } from './timeSlice';
+import { createToolSlice } from './toolSlice';
 import { createViewSlice } from './viewSlice';
 
+/** The state as a fresh page sees it; the app has one store, tests may make more. */
+export function createAppStore() {
+  return createStore<AppState>()((...args) => ({
+    ...createScenarioSlice(...args),
+    ...createHistorySlice(...args),
+    ...createProbesSlice(...args),
+    ...createViewSlice(...args),
+    ...createDisplaySlice(...args),
+    ...createTimeSlice(...args),
+    ...createToolSlice(...args),
+    ...createFieldSlice(...args),
+  }));
+}
+
+export type AppStore = ReturnType<typeof createAppStore>;
+
 /** The one store; React binds to it through hooks, per-frame code reads appStore.getState(). */
-export const appStore = createStore<AppState>()((...args) => ({
-  ...createScenarioSlice(...args),
-  ...createViewSlice(...args),
-  ...createTimeSlice(...args),
-}));
+export const appStore = createAppStore();

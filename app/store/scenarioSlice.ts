@@ -1,18 +1,26 @@
 import {
   buildCharges,
+  parseScenario,
   parseScenarioText,
   type Scenario,
+  type ScenarioCharge,
   ScenarioError,
 } from '../../src/io/scenario';
 import type { Charge } from '../../src/physics/charge';
+import { observationSpan, suggestedRate } from '../scenario/timeSpan';
 import type { SliceCreator } from './appState';
+import { selectSliceSpec } from './sliceSpecOf';
 
 export type ScenarioStatus = 'empty' | 'loading' | 'ready' | 'failed';
 
 export interface ScenarioSlice {
   scenario: Scenario | null;
+  /** The scenario as it was opened, so the summary can say when it has been edited. */
+  openedScenario: Scenario | null;
   /** The scenario's charges with their sampled paths, in document order. */
   charges: readonly Charge[];
+  /** Index of the charge the path editors work on. */
+  selectedCharge: number;
   /** Where the scenario came from (a URL or file name). */
   scenarioSource: string | null;
   scenarioStatus: ScenarioStatus;
@@ -22,11 +30,20 @@ export interface ScenarioSlice {
   /** Parses and builds a scenario document; on success also shows its view and time. */
   applyScenarioText(text: string, source: string): void;
   failScenarioLoad(source: string, message: string): void;
+  /**
+   * Replaces the charges after checking them as a whole scenario. Returns null when applied,
+   * else the one-line reason (naming the field) and leaves everything as it was.
+   * `record` false applies without an undo step (a drag records once, at its start).
+   */
+  editCharges(next: readonly ScenarioCharge[], label: string, record?: boolean): string | null;
+  selectCharge(index: number): void;
 }
 
 export const createScenarioSlice: SliceCreator<ScenarioSlice> = (set, get) => ({
   scenario: null,
+  openedScenario: null,
   charges: [],
+  selectedCharge: 0,
   scenarioSource: null,
   scenarioStatus: 'empty',
   scenarioError: null,
@@ -45,14 +62,42 @@ export const createScenarioSlice: SliceCreator<ScenarioSlice> = (set, get) => ({
     }
     set({
       scenario,
+      openedScenario: scenario,
       charges,
+      selectedCharge: 0,
       scenarioSource: source,
       scenarioStatus: 'ready',
       scenarioError: null,
     });
+    get().clearHistory();
     get().showView(scenario.view);
     get().setTime(scenario.view.time);
+    const span = observationSpan(charges, selectSliceSpec(get()));
+    if (span !== null) get().setRate(suggestedRate(span));
   },
   failScenarioLoad: (source, message) =>
     set({ scenarioSource: source, scenarioStatus: 'failed', scenarioError: message }),
+  editCharges: (next, label, record = true) => {
+    const current = get().scenario;
+    if (current === null) return 'no scenario is open';
+    let scenario: Scenario;
+    let charges: Charge[];
+    try {
+      scenario = parseScenario({ ...current, charges: next });
+      charges = buildCharges(scenario);
+    } catch (error) {
+      if (error instanceof ScenarioError) return error.message;
+      throw error;
+    }
+    if (record) get().record(label);
+    set((state) => ({
+      scenario,
+      charges,
+      selectedCharge: Math.min(state.selectedCharge, charges.length - 1),
+    }));
+    return null;
+  },
+  selectCharge: (index) => {
+    if (index >= 0 && index < get().charges.length) set({ selectedCharge: index });
+  },
 });

@@ -1,23 +1,28 @@
 import { useFrame, useThree } from '@react-three/fiber';
 import { useEffect, useRef } from 'react';
-import type { Group } from 'three';
-import type { SliceSpec } from '../../src/engine/sliceSpec';
+import type { Mesh } from 'three';
+import type { Triple } from '../../src/engine/sliceSpec';
 import { pathState } from '../../src/path/pathState';
 import type { Charge } from '../../src/physics/charge';
 import { appStore } from '../store/appStore';
-import { toSlice } from './sliceCoordinates';
 
-export const MARKER_COLOUR = '#46d2ff';
+export const NEGATIVE_COLOUR = '#46d2ff';
+export const POSITIVE_COLOUR = '#ff7a59';
 const RING_COLOUR = '#0b0d10';
 
 const scratch = pathState();
 
+interface ChargeMarkersProps {
+  origin: Triple;
+  charges: readonly Charge[];
+  /** Marker radius, m: a fixed share of the view so it looks the same at any zoom. */
+  radius: number;
+}
+
 /** A dot at each charge's present position; moved per frame from the store's time, not by re-rendering. */
-export function ChargeMarkers({ spec, charges }: { spec: SliceSpec; charges: readonly Charge[] }) {
+export function ChargeMarkers({ origin, charges, radius }: ChargeMarkersProps) {
   const invalidate = useThree((s) => s.invalidate);
-  const markers = useRef<(Group | null)[]>([]);
-  // Radius in slice metres: a fixed share of the view, so the dot looks the same at any zoom.
-  const radius = 0.011 * Math.min(spec.width, spec.height);
+  const markers = useRef<(Mesh | null)[]>([]);
 
   useEffect(
     () =>
@@ -29,31 +34,33 @@ export function ChargeMarkers({ spec, charges }: { spec: SliceSpec; charges: rea
 
   useFrame(() => {
     const { time } = appStore.getState();
-    charges.forEach(({ path }, k) => {
+    for (let k = 0; k < charges.length; k++) {
       const marker = markers.current[k];
-      if (!marker) return;
-      path.stateAt(time, scratch);
-      const [a, b] = toSlice(spec, scratch.px, scratch.py, scratch.pz);
-      marker.position.set(a, b, 0.02);
-    });
+      if (!marker) continue;
+      charges[k].path.stateAt(time, scratch);
+      marker.position.set(scratch.px - origin[0], scratch.py - origin[1], scratch.pz - origin[2]);
+    }
   });
 
-  return charges.map((_, k) => (
-    <group
+  return charges.map(({ charge }, k) => (
+    <mesh
       // biome-ignore lint/suspicious/noArrayIndexKey: charges are identified by their order in the scenario
       key={k}
-      ref={(group) => {
-        markers.current[k] = group;
+      ref={(mesh) => {
+        markers.current[k] = mesh;
       }}
+      renderOrder={6}
     >
-      <mesh renderOrder={2}>
-        <circleGeometry args={[radius * 1.45, 32]} />
+      <sphereGeometry args={[radius, 20, 12]} />
+      <meshBasicMaterial
+        color={charge < 0 ? NEGATIVE_COLOUR : POSITIVE_COLOUR}
+        depthTest={false}
+        toneMapped={false}
+      />
+      <mesh renderOrder={5}>
+        <sphereGeometry args={[radius * 1.5, 20, 12]} />
         <meshBasicMaterial color={RING_COLOUR} depthTest={false} toneMapped={false} />
       </mesh>
-      <mesh renderOrder={3}>
-        <circleGeometry args={[radius, 32]} />
-        <meshBasicMaterial color={MARKER_COLOUR} depthTest={false} toneMapped={false} />
-      </mesh>
-    </group>
+    </mesh>
   ));
 }

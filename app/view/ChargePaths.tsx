@@ -1,32 +1,38 @@
 import { extend } from '@react-three/fiber';
 import { useEffect, useMemo } from 'react';
 import { BufferGeometry, Float32BufferAttribute, Line } from 'three';
-import type { SliceSpec } from '../../src/engine/sliceSpec';
+import type { Triple } from '../../src/engine/sliceSpec';
 import type { Charge } from '../../src/physics/charge';
-import { toSlice } from './sliceCoordinates';
 
 // <line> is taken by SVG in JSX, so three's Line is registered under r3f's <threeLine> name.
 extend({ ThreeLine: Line });
 
 export const PATH_COLOUR = '#e8f1ff';
+export const SELECTED_PATH_COLOUR = '#ffd166';
 
-/** Each charge's sampled path, projected onto the slice, as a thin line above the map. */
-export function ChargePaths({ spec, charges }: { spec: SliceSpec; charges: readonly Charge[] }) {
+interface ChargePathsProps {
+  /** Scene origin in the world, m: positions are drawn relative to it so Float32 keeps precision. */
+  origin: Triple;
+  charges: readonly Charge[];
+  selected: number;
+}
+
+/** Each charge's sampled path as a thin line; the one being edited stands out. */
+export function ChargePaths({ origin, charges, selected }: ChargePathsProps) {
   const geometries = useMemo(
     () =>
       charges.map(({ path }) => {
         const positions = new Float32Array(3 * path.count);
         for (let i = 0; i < path.count; i++) {
-          const [a, b] = toSlice(spec, path.x[i], path.y[i], path.z[i]);
-          positions[3 * i] = a;
-          positions[3 * i + 1] = b;
-          positions[3 * i + 2] = 0.01;
+          positions[3 * i] = path.x[i] - origin[0];
+          positions[3 * i + 1] = path.y[i] - origin[1];
+          positions[3 * i + 2] = path.z[i] - origin[2];
         }
         const geometry = new BufferGeometry();
         geometry.setAttribute('position', new Float32BufferAttribute(positions, 3));
         return geometry;
       }),
-    [spec, charges],
+    [origin, charges],
   );
   useEffect(
     () => () => {
@@ -37,8 +43,13 @@ export function ChargePaths({ spec, charges }: { spec: SliceSpec; charges: reado
 
   return geometries.map((geometry, k) => (
     // biome-ignore lint/suspicious/noArrayIndexKey: charges are identified by their order in the scenario
-    <threeLine key={k} geometry={geometry} renderOrder={1}>
-      <lineBasicMaterial color={PATH_COLOUR} transparent opacity={0.55} depthTest={false} />
+    <threeLine key={k} geometry={geometry} renderOrder={3}>
+      <lineBasicMaterial
+        color={k === selected && charges.length > 1 ? SELECTED_PATH_COLOUR : PATH_COLOUR}
+        transparent
+        opacity={0.6}
+        depthTest={false}
+      />
     </threeLine>
   ));
 }

@@ -1,36 +1,55 @@
 import { useFrame, useThree } from '@react-three/fiber';
 import { useEffect, useMemo, useRef } from 'react';
-import { DataTexture, NearestFilter, RGBAFormat, SRGBColorSpace, UnsignedByteType } from 'three';
+import {
+  DataTexture,
+  DoubleSide,
+  NearestFilter,
+  RGBAFormat,
+  SRGBColorSpace,
+  UnsignedByteType,
+} from 'three';
+import type { ColourScale } from '../field/colourScale';
+import { paintValues } from '../field/colourScale';
 import type { FieldMap } from '../field/fieldMap';
-import { paintMagnitude } from '../field/logColourScale';
+import type { QuantityValues } from '../field/mapQuantity';
 
 interface FieldPlaneProps {
   map: FieldMap;
+  quantity: QuantityValues;
+  scale: ColourScale | null;
   /** Called once the frame showing map `id` has been drawn. */
   onDrawn(id: number): void;
 }
 
-/** The slice as a quad textured with |E| on the log colour scale, one texel per grid point. */
-export function FieldPlane({ map, onDrawn }: FieldPlaneProps) {
+/** The slice as a quad textured with the chosen quantity, one texel per grid point. */
+export function FieldPlane({ map, quantity, scale, onDrawn }: FieldPlaneProps) {
   const invalidate = useThree((s) => s.invalidate);
+  const { nx, ny, mask } = map.fields;
+  // One texture per grid size, repainted in place as maps arrive: no allocation per frame.
   const texture = useMemo(() => {
-    const { nx, ny, mask } = map.fields;
-    const range = map.colourRange ?? { min: 1, max: 10 };
-    const data = paintMagnitude(map.magnitude, mask, range);
-    const result = new DataTexture(data, nx, ny, RGBAFormat, UnsignedByteType);
+    const result = new DataTexture(
+      new Uint8Array(4 * nx * ny),
+      nx,
+      ny,
+      RGBAFormat,
+      UnsignedByteType,
+    );
     result.colorSpace = SRGBColorSpace;
     // Nearest so every grid point shows as its own cell: no smoothing the data did not have.
     result.magFilter = NearestFilter;
     result.minFilter = NearestFilter;
     result.generateMipmaps = false;
-    result.needsUpdate = true;
     return result;
-  }, [map]);
+  }, [nx, ny]);
+  useEffect(() => () => texture.dispose(), [texture]);
 
   useEffect(() => {
+    const data = texture.image.data as Uint8Array;
+    if (scale === null) data.fill(0);
+    else paintValues(quantity.values, mask, scale, data);
+    texture.needsUpdate = true;
     invalidate();
-    return () => texture.dispose();
-  }, [texture, invalidate]);
+  }, [texture, quantity, mask, scale, invalidate]);
 
   const drawn = useRef(0);
   useFrame(() => {
@@ -44,7 +63,7 @@ export function FieldPlane({ map, onDrawn }: FieldPlaneProps) {
   return (
     <mesh renderOrder={0}>
       <planeGeometry args={[map.spec.width, map.spec.height]} />
-      <meshBasicMaterial map={texture} toneMapped={false} />
+      <meshBasicMaterial map={texture} toneMapped={false} side={DoubleSide} />
     </mesh>
   );
 }

@@ -1,72 +1,78 @@
 import { Canvas } from '@react-three/fiber';
 import { type CSSProperties, useState } from 'react';
+import type { DisplayedMap } from '../field/displayedMap';
 import { formatSI } from '../format/siFormat';
-import type { FieldMapState } from '../hooks/useFieldMap';
-import { ChargeMarkers } from './ChargeMarkers';
-import { ChargePaths } from './ChargePaths';
-import { FieldPlane } from './FieldPlane';
+import { useAppState } from '../hooks/useAppState';
+import { useDisplayedMap } from '../hooks/useDisplayedMap';
+import { useSliceSpec } from '../hooks/useSliceSpec';
+import { FieldScene } from './FieldScene';
+import { ScaleBar } from './ScaleBar';
 import { SliceAxes } from './SliceAxes';
-import { SliceCamera } from './SliceCamera';
+import { SliceOverlay } from './SliceOverlay';
 import { axisName } from './sliceCoordinates';
 import { ViewErrorBoundary } from './ViewErrorBoundary';
 
 /**
- * The slice seen from above: |E| map, charge paths and present positions. `data-ready` turns
- * "true" once the latest map has been drawn, so tests and scripts can wait on it.
+ * The slice, its map and everything drawn over it. `data-ready` turns "true" once the latest
+ * full map of the slice in view has been drawn, so tests and scripts can wait on it.
  */
-export function FieldView({ state }: { state: FieldMapState }) {
-  const { map, pending } = state;
+export function FieldView() {
+  const spec = useSliceSpec();
+  const shown = useDisplayedMap();
+  const pending = useAppState((s) => s.fieldPending);
+  const mode = useAppState((s) => s.viewMode);
   const [drawnId, setDrawnId] = useState(0);
-  const ready = map !== null && !pending && drawnId === map.id;
-  const spec = map?.spec;
-  const aspect = spec ? spec.width / spec.height : 1;
-  const label = map
-    ? `Map of the electric field magnitude on the ${axisName(map.spec.u)}${axisName(map.spec.v)} slice at t = ${formatSI(map.spec.time, 's', 4)}, log colour scale` +
-      (map.colourRange
-        ? ` from ${formatSI(map.colourRange.min, 'V/m')} to ${formatSI(map.colourRange.max, 'V/m')}`
-        : '')
-    : 'Field map, not computed yet';
+  const map = shown?.map ?? null;
+  const ready = map !== null && !pending && !map.coarse && drawnId === map.id;
+  const aspect = spec.width / spec.height;
 
   return (
     <div className="field-frame" style={{ '--slice-aspect': aspect } as CSSProperties}>
       <div className="field-plot">
-        <div
+        <section
           className="field-view"
           data-testid="field-view"
           data-ready={ready ? 'true' : 'false'}
           data-map-id={map?.id ?? 0}
-          role="img"
-          aria-label={label}
+          data-map-time={map?.spec.time ?? ''}
+          aria-label="Field view"
           aria-busy={!ready}
         >
-          <ViewErrorBoundary>
-            <Canvas
-              orthographic
-              flat
-              frameloop="demand"
-              dpr={[1, 2]}
-              camera={{ position: [0, 0, 1], near: 0.001, far: 10, zoom: 1 }}
-              gl={{ preserveDrawingBuffer: true, antialias: true }}
-            >
-              <color attach="background" args={['#0c0e12']} />
-              {map && spec && (
-                <>
-                  <SliceCamera width={spec.width} height={spec.height} />
-                  <FieldPlane map={map} onDrawn={setDrawnId} />
-                  <ChargePaths spec={spec} charges={map.charges} />
-                  <ChargeMarkers spec={spec} charges={map.charges} />
-                </>
-              )}
-            </Canvas>
-          </ViewErrorBoundary>
+          <div className="field-canvas" role="img" aria-label={describeMap(shown)}>
+            <ViewErrorBoundary>
+              <Canvas
+                key={mode}
+                orthographic={mode === '2d'}
+                flat
+                frameloop="demand"
+                dpr={[1, 2]}
+                gl={{ preserveDrawingBuffer: true, antialias: true }}
+              >
+                <color attach="background" args={['#0c0e12']} />
+                <FieldScene spec={spec} shown={shown} onDrawn={setDrawnId} />
+              </Canvas>
+            </ViewErrorBoundary>
+          </div>
+          <SliceOverlay spec={spec} />
+          {mode === '2d' && <ScaleBar spec={spec} />}
           {!ready && (
-            <div className="field-status">
+            <div className="field-status" aria-live="polite">
               {map ? 'Updating…' : pending ? 'Computing field map…' : 'No scenario open'}
             </div>
           )}
-        </div>
-        {spec && <SliceAxes spec={spec} />}
+        </section>
+        {mode === '2d' && <SliceAxes spec={spec} />}
       </div>
     </div>
   );
+}
+
+function describeMap(shown: DisplayedMap | null): string {
+  if (shown === null) return 'Field map, not computed yet';
+  const { map, quantity, scale } = shown;
+  const plane = `${axisName(map.spec.u)}${axisName(map.spec.v)}`;
+  const range = scale
+    ? ` from ${formatSI(scale.min, quantity.unit)} to ${formatSI(scale.max, quantity.unit)}`
+    : '';
+  return `Map of ${quantity.label} on the ${plane} slice at t = ${formatSI(map.spec.time, 's', 4)}, ${scale?.scale ?? 'no'} colour scale${range}`;
 }

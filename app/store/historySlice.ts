@@ -1,0 +1,61 @@
+import type { Scenario } from '../../src/io/scenario';
+import type { Charge } from '../../src/physics/charge';
+import type { SliceCreator } from './appState';
+import type { Probe } from './probesSlice';
+
+/** What undo and redo restore: the user's own work, not how it is being looked at. */
+export interface DocumentSnapshot {
+  /** What the edit that followed this snapshot did, e.g. "sketch a path". */
+  label: string;
+  scenario: Scenario | null;
+  charges: readonly Charge[];
+  probes: readonly Probe[];
+}
+
+/** Edits remembered; older ones are forgotten first. */
+export const HISTORY_LIMIT = 200;
+
+export interface HistorySlice {
+  past: readonly DocumentSnapshot[];
+  future: readonly DocumentSnapshot[];
+  /** Remembers the document as it is now, before an edit called `label`; clears redo. */
+  record(label: string): void;
+  undo(): void;
+  redo(): void;
+  clearHistory(): void;
+}
+
+export const createHistorySlice: SliceCreator<HistorySlice> = (set, get) => {
+  const snapshot = (label: string): DocumentSnapshot => {
+    const { scenario, charges, probes } = get();
+    return { label, scenario, charges, probes };
+  };
+  const restore = (target: DocumentSnapshot) =>
+    set({ scenario: target.scenario, charges: target.charges, probes: target.probes });
+  return {
+    past: [],
+    future: [],
+    record: (label) =>
+      set((state) => ({
+        past: [...state.past, snapshot(label)].slice(-HISTORY_LIMIT),
+        future: [],
+      })),
+    undo: () => {
+      const { past, future } = get();
+      const target = past.at(-1);
+      if (target === undefined) return;
+      const current = snapshot(target.label);
+      set({ past: past.slice(0, -1), future: [...future, current] });
+      restore(target);
+    },
+    redo: () => {
+      const { past, future } = get();
+      const target = future.at(-1);
+      if (target === undefined) return;
+      const current = snapshot(target.label);
+      set({ future: future.slice(0, -1), past: [...past, current] });
+      restore(target);
+    },
+    clearHistory: () => set({ past: [], future: [] }),
+  };
+};
