@@ -1,6 +1,5 @@
 import { useRef, useState } from 'react';
 import { useAppState } from './hooks/useAppState';
-import { useDisplayedMap } from './hooks/useDisplayedMap';
 import { useShortcuts } from './hooks/useShortcuts';
 import { downloadScenario } from './io/scenarioDocument';
 import { CAUTIONS_ID, Cautions } from './panels/Cautions';
@@ -18,7 +17,6 @@ import { FieldView } from './view/FieldView';
 
 export function App() {
   useShortcuts();
-  const shown = useDisplayedMap();
   const fieldError = useAppState((s) => s.fieldError);
   const fieldFault = useAppState((s) => s.fieldFault);
   const hasScenario = useAppState((s) => s.scenario !== null);
@@ -65,7 +63,7 @@ export function App() {
           <Toolbar />
           <div className="field-area">
             <FieldView />
-            <ColourBar shown={shown} />
+            <ColourBar />
           </div>
           <TimeBar />
         </div>
@@ -87,7 +85,7 @@ export function App() {
             <h2 id="slice-details-title" className="panel-title">
               Slice details
             </h2>
-            <Readouts shown={shown} />
+            <Readouts />
             <MapLegend />
           </section>
         </aside>

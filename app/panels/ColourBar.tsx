@@ -1,10 +1,11 @@
 import { MASKED_COLOUR, scaleGradient, scaleTicks } from '../field/colourScale';
-import type { DisplayedMap } from '../field/displayedMap';
 import { COLOUR_QUANTILES } from '../field/mapQuantity';
 import { formatSI } from '../format/siFormat';
+import { useDisplayedMap } from '../hooks/useDisplayedMap';
 
 /** The map's colour scale with its quantity, unit and clamped ends spelled out. */
-export function ColourBar({ shown }: { shown: DisplayedMap | null }) {
+export function ColourBar() {
+  const shown = useDisplayedMap();
   const quantity = shown?.quantity;
   const scale = shown?.scale ?? null;
   const unit = quantity?.unit ?? '';

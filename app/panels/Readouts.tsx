@@ -1,10 +1,11 @@
-import type { DisplayedMap } from '../field/displayedMap';
 import { formatLength } from '../format/lengthUnit';
 import { formatSI } from '../format/siFormat';
+import { useDisplayedMap } from '../hooks/useDisplayedMap';
 import { axisName } from '../view/sliceCoordinates';
 
 /** The numbers behind the picture: time, slice, grid, range of the quantity shown, and cost. */
-export function Readouts({ shown }: { shown: DisplayedMap | null }) {
+export function Readouts() {
+  const shown = useDisplayedMap();
   if (shown === null) return <p className="muted">No field map yet.</p>;
   const { map, quantity } = shown;
   const { spec, stats } = map;

@@ -3,7 +3,7 @@ import { lightConeShells, shellSpacing } from '../field/lightConeShells';
 import { formatLength } from '../format/lengthUnit';
 import { formatSI } from '../format/siFormat';
 import { useAppState } from '../hooks/useAppState';
-import { useSliceSpec } from '../hooks/useSliceSpec';
+import { useSliceGeometry } from '../hooks/useSliceSpec';
 import { SHELL_COUNT } from '../view/ShellLines';
 
 /** The shells in words: how often they are sent and where the newest one has got to. */
@@ -11,7 +11,7 @@ export function ShellNote() {
   const charges = useAppState((s) => s.charges);
   const selected = useAppState((s) => s.selectedCharge);
   const time = useAppState((s) => s.time);
-  const spec = useSliceSpec();
+  const spec = useSliceGeometry();
   const spacing = shellSpacing(spec);
   const newest = useMemo(() => {
     const charge = charges[selected];

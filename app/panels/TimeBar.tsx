@@ -1,8 +1,16 @@
 import { useId, useMemo } from 'react';
+
 import { formatSI } from '../format/siFormat';
 import { useAppState } from '../hooks/useAppState';
-import { useSliceSpec } from '../hooks/useSliceSpec';
+import { useSliceGeometry } from '../hooks/useSliceSpec';
 import { observationSpan, PLAYBACK_RATES, TIME_STEPS } from '../scenario/timeSpan';
+
+// Made once: the list is long and the bar re-renders at every move of the time.
+const RATE_OPTIONS = PLAYBACK_RATES.map((choice) => (
+  <option key={choice} value={choice}>
+    {formatSI(choice, 's', 1)} per s
+  </option>
+));
 
 /** Play, pause, step and scrub the observation time; choose how fast it plays. */
 export function TimeBar() {
@@ -14,7 +22,7 @@ export function TimeBar() {
   const setPlaying = useAppState((s) => s.setPlaying);
   const setRate = useAppState((s) => s.setRate);
   const charges = useAppState((s) => s.charges);
-  const spec = useSliceSpec();
+  const spec = useSliceGeometry();
   const span = useMemo(() => observationSpan(charges, spec), [charges, spec]);
   if (span === null) return null;
   const step = (span.end - span.start) / TIME_STEPS;
@@ -85,11 +93,7 @@ export function TimeBar() {
           aria-label="Playback rate"
           onChange={(event) => setRate(Number(event.currentTarget.value))}
         >
-          {PLAYBACK_RATES.map((choice) => (
-            <option key={choice} value={choice}>
-              {formatSI(choice, 's', 1)} per s
-            </option>
-          ))}
+          {RATE_OPTIONS}
         </select>
       </label>
     </fieldset>

@@ -1,10 +1,9 @@
-import { useFrame, useThree } from '@react-three/fiber';
-import { useEffect, useRef } from 'react';
+import { useThree } from '@react-three/fiber';
+import { useLayoutEffect, useRef } from 'react';
 import type { Mesh } from 'three';
 import type { Triple } from '../../src/engine/sliceSpec';
 import { pathState } from '../../src/path/pathState';
 import type { Charge } from '../../src/physics/charge';
-import { appStore } from '../store/appStore';
 
 export const NEGATIVE_COLOUR = '#46d2ff';
 export const POSITIVE_COLOUR = '#ff7a59';
@@ -17,30 +16,24 @@ interface ChargeMarkersProps {
   charges: readonly Charge[];
   /** Marker radius, m: a fixed share of the view so it looks the same at any zoom. */
   radius: number;
+  /** The instant drawn, s. */
+  time: number;
 }
 
-/** A dot at each charge's present position; moved per frame from the store's time, not by re-rendering. */
-export function ChargeMarkers({ origin, charges, radius }: ChargeMarkersProps) {
+/** A dot at each charge's present position at the instant drawn; moved in place, not re-created. */
+export function ChargeMarkers({ origin, charges, radius, time }: ChargeMarkersProps) {
   const invalidate = useThree((s) => s.invalidate);
   const markers = useRef<(Mesh | null)[]>([]);
 
-  useEffect(
-    () =>
-      appStore.subscribe((state, previous) => {
-        if (state.time !== previous.time) invalidate();
-      }),
-    [invalidate],
-  );
-
-  useFrame(() => {
-    const { time } = appStore.getState();
+  useLayoutEffect(() => {
     for (let k = 0; k < charges.length; k++) {
       const marker = markers.current[k];
       if (!marker) continue;
       charges[k].path.stateAt(time, scratch);
       marker.position.set(scratch.px - origin[0], scratch.py - origin[1], scratch.pz - origin[2]);
     }
-  });
+    invalidate();
+  }, [charges, origin, time, invalidate]);
 
   return charges.map(({ charge }, k) => (
     <mesh

@@ -17,8 +17,8 @@ interface FieldPlaneProps {
   map: FieldMap;
   quantity: QuantityValues;
   scale: ColourScale | null;
-  /** Called once the frame showing map `id` has been drawn. */
-  onDrawn(id: number): void;
+  /** Called once the frame showing map `id` (for observation time `time`, s) has been drawn. */
+  onDrawn(id: number, time: number): void;
 }
 
 /** The slice as a quad textured with the chosen quantity, one texel per grid point. */
@@ -55,9 +55,10 @@ export function FieldPlane({ map, quantity, scale, onDrawn }: FieldPlaneProps) {
   useFrame(() => {
     if (drawn.current === map.id) return;
     drawn.current = map.id;
-    const id = map.id;
+    const { id } = map;
+    const { time } = map.spec;
     // Frame callbacks run just before the render of the same frame; report after it.
-    setTimeout(() => onDrawn(id), 0);
+    setTimeout(() => onDrawn(id, time), 0);
   });
 
   return (

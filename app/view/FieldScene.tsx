@@ -14,7 +14,7 @@ import { SliceFrame } from './SliceFrame';
 interface FieldSceneProps {
   spec: SliceSpec;
   shown: DisplayedMap | null;
-  onDrawn(id: number): void;
+  onDrawn(id: number, time: number): void;
 }
 
 /** What the canvas draws; the scene origin is the centre of the slice in view. */
@@ -22,7 +22,10 @@ export function FieldScene({ spec, shown, onDrawn }: FieldSceneProps) {
   const charges = useAppState((s) => s.charges);
   const selectedCharge = useAppState((s) => s.selectedCharge);
   const probes = useAppState((s) => s.probes);
-  const time = useAppState((s) => s.time);
+  const storeTime = useAppState((s) => s.time);
+  // Everything is drawn at the instant of the map on screen, so the picture is one instant and
+  // the canvas redraws only when a map arrives, not at every move of the time slider.
+  const time = shown?.map.spec.time ?? storeTime;
   const arrows = useAppState((s) => s.arrows);
   const shells = useAppState((s) => s.shells);
   const mode = useAppState((s) => s.viewMode);
@@ -63,7 +66,7 @@ export function FieldScene({ spec, shown, onDrawn }: FieldSceneProps) {
         time={time}
         radius={markerRadius}
       />
-      <ChargeMarkers origin={origin} charges={charges} radius={markerRadius} />
+      <ChargeMarkers origin={origin} charges={charges} radius={markerRadius} time={time} />
     </>
   );
 }

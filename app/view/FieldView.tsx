@@ -1,10 +1,11 @@
 import { Canvas } from '@react-three/fiber';
-import { type CSSProperties, useState } from 'react';
+import { type CSSProperties, useMemo, useState } from 'react';
 import type { DisplayedMap } from '../field/displayedMap';
 import { formatSI } from '../format/siFormat';
 import { useAppState } from '../hooks/useAppState';
 import { useDisplayedMap } from '../hooks/useDisplayedMap';
-import { useSliceSpec } from '../hooks/useSliceSpec';
+import { useSliceGeometry } from '../hooks/useSliceSpec';
+import { appStore } from '../store/appStore';
 import { FieldScene } from './FieldScene';
 import { ScaleBar } from './ScaleBar';
 import { SliceAxes } from './SliceAxes';
@@ -17,14 +18,38 @@ import { ViewErrorBoundary } from './ViewErrorBoundary';
  * full map of the slice in view has been drawn, so tests and scripts can wait on it.
  */
 export function FieldView() {
-  const spec = useSliceSpec();
+  const spec = useSliceGeometry();
   const shown = useDisplayedMap();
   const pending = useAppState((s) => s.fieldPending);
   const mode = useAppState((s) => s.viewMode);
-  const [drawnId, setDrawnId] = useState(0);
+  const [drawn, setDrawn] = useState({ id: 0, time: Number.NaN, mode });
+  const [onDrawn] = useState(
+    () => (id: number, time: number) => setDrawn({ id, time, mode: appStore.getState().viewMode }),
+  );
   const map = shown?.map ?? null;
-  const ready = map !== null && !pending && !map.coarse && drawnId === map.id;
+  const ready =
+    map !== null && !pending && !map.coarse && drawn.id === map.id && drawn.mode === mode;
   const aspect = spec.width / spec.height;
+  // The same element while the scene's inputs stand still: reporting a drawn frame must not
+  // make the canvas render its scene again.
+  const canvas = useMemo(
+    () => (
+      <ViewErrorBoundary>
+        <Canvas
+          key={mode}
+          orthographic={mode === '2d'}
+          flat
+          frameloop="demand"
+          dpr={[1, 2]}
+          gl={{ preserveDrawingBuffer: true, antialias: false }}
+        >
+          <color attach="background" args={['#0c0e12']} />
+          <FieldScene spec={spec} shown={shown} onDrawn={onDrawn} />
+        </Canvas>
+      </ViewErrorBoundary>
+    ),
+    [mode, spec, shown, onDrawn],
+  );
 
   return (
     <div className="field-frame" style={{ '--slice-aspect': aspect } as CSSProperties}>
@@ -35,23 +60,12 @@ export function FieldView() {
           data-ready={ready ? 'true' : 'false'}
           data-map-id={map?.id ?? 0}
           data-map-time={map?.spec.time ?? ''}
+          data-drawn-time={Number.isNaN(drawn.time) ? '' : drawn.time}
           aria-label="Field view"
           aria-busy={!ready}
         >
           <div className="field-canvas" role="img" aria-label={describeMap(shown)}>
-            <ViewErrorBoundary>
-              <Canvas
-                key={mode}
-                orthographic={mode === '2d'}
-                flat
-                frameloop="demand"
-                dpr={[1, 2]}
-                gl={{ preserveDrawingBuffer: true, antialias: true }}
-              >
-                <color attach="background" args={['#0c0e12']} />
-                <FieldScene spec={spec} shown={shown} onDrawn={setDrawnId} />
-              </Canvas>
-            </ViewErrorBoundary>
+            {canvas}
           </div>
           <SliceOverlay spec={spec} />
           {mode === '2d' && <ScaleBar spec={spec} />}

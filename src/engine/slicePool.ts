@@ -15,6 +15,8 @@ export interface SlicePoolOptions {
   /** Told, in one line, whenever a worker failed and was replaced. */
   onFault?: (message: string) => void;
   clock?: () => number;
+  /** Points below which a tile costs more in messages than it gains in balance (default 2048). */
+  minTilePoints?: number;
 }
 
 export interface SliceRequestOptions {
@@ -178,8 +180,14 @@ export class SlicePool {
         resolve({ fields, stats });
         return;
       }
-      // About four tiles per worker balances load without much per-tile overhead.
-      const rows = Math.max(1, Math.ceil(spec.ny / (4 * this.size)));
+      // About four tiles per worker balances load; small slices (a coarse pass) get one per
+      // worker, as each tile costs two messages and a copy on the calling thread.
+      const balanced = Math.ceil(spec.ny / (4 * this.size));
+      const worthwhile = Math.ceil((this.options.minTilePoints ?? 2048) / spec.nx);
+      const rows = Math.max(
+        1,
+        Math.min(Math.ceil(spec.ny / this.size), Math.max(balanced, worthwhile)),
+      );
       for (let j0 = 0; j0 < spec.ny; j0 += rows) {
         this.queue.push({ j0, j1: Math.min(spec.ny, j0 + rows), attempts: 0 });
       }

@@ -39,6 +39,8 @@ function poolWith(plans: FaultPlan[], faults: string[] = []): SlicePool {
     size: 2,
     tileTimeoutMs: 200,
     onFault: (m) => faults.push(m),
+    // Four tiles per worker even on this small slice, so faults can strike mid-slice.
+    minTilePoints: 0,
   });
 }
 
