@@ -1,5 +1,5 @@
 import { useAppState } from '../hooks/useAppState';
-import { NAMED_CHARGES } from './ChargesPanel';
+import { NAMED_CHARGES } from '../scenario/particles';
 import { NumberField } from './fields/NumberField';
 
 /** The charge of one particle: electron, proton or a value in coulombs. */

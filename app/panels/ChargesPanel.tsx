@@ -1,15 +1,8 @@
 import type { ScenarioCharge } from '../../src/io/scenario';
-import { ELECTRON_MASS, ELEMENTARY_CHARGE, PROTON_MASS } from '../../src/physics/constants';
 import { formatSI } from '../format/siFormat';
 import { useAppState } from '../hooks/useAppState';
 import { ChargeValueField } from './ChargeValueField';
 import { PathEditor } from './PathEditor';
-
-/** Charges offered by name; anything else is typed in coulombs. */
-export const NAMED_CHARGES = [
-  { name: 'electron', charge: -ELEMENTARY_CHARGE, mass: ELECTRON_MASS },
-  { name: 'proton', charge: ELEMENTARY_CHARGE, mass: PROTON_MASS },
-] as const;
 
 /** The charges in the scenario: pick one to edit, add one, remove one. */
 export function ChargesPanel() {

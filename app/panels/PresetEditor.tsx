@@ -2,6 +2,7 @@ import type { PresetName, ScenarioPath } from '../../src/io/scenario';
 import {
   ACCELERATION_UNITS,
   ANGLE_UNITS,
+  FIELD_UNITS,
   FREQUENCY_UNITS,
   LENGTH_UNITS,
   PLAIN_NUMBER,
@@ -10,6 +11,13 @@ import {
 } from '../format/units';
 import { useAppState } from '../hooks/useAppState';
 import { withPath } from '../scenario/chargeEdits';
+import {
+  bendingField,
+  orbitRadius,
+  undulatorField,
+  undulatorStrength,
+} from '../scenario/fieldStrength';
+import { massOf } from '../scenario/particles';
 import { type ParamKind, PRESET_FORMS } from '../scenario/presetScenes';
 import { NumberField } from './fields/NumberField';
 import { SpeedField } from './fields/SpeedField';
@@ -32,6 +40,9 @@ export function PresetEditor({ index, path }: { index: number; path: PresetPath 
   const scenario = useAppState((s) => s.scenario);
   const editCharges = useAppState((s) => s.editCharges);
   const form = PRESET_FORMS[path.preset];
+  const charge = scenario?.charges[index].charge ?? 0;
+  // Field strengths need the mass, known only for the particles offered by name.
+  const mass = massOf(charge);
   const params = path.params as Record<string, number>;
 
   const edit = (change: Partial<PresetPath>, label: string) => {
@@ -81,6 +92,28 @@ export function PresetEditor({ index, path }: { index: number; path: PresetPath 
             onCommit={(value) => setParam(param.key, value)}
           />
         ),
+      )}
+      {mass !== null && path.preset === 'circularOrbit' && (
+        <NumberField
+          key="bending-field"
+          label="or bending field B"
+          value={bendingField(params.radius, params.beta, mass, charge)}
+          units={FIELD_UNITS}
+          testId="param-bending-field"
+          onCommit={(field) => setParam('radius', orbitRadius(field, params.beta, mass, charge))}
+        />
+      )}
+      {mass !== null && path.preset === 'undulatorWiggle' && (
+        <NumberField
+          key="peak-field"
+          label="or peak field B0"
+          value={undulatorField(params.strength, params.period, mass, charge)}
+          units={FIELD_UNITS}
+          testId="param-peak-field"
+          onCommit={(field) =>
+            setParam('strength', undulatorStrength(field, params.period, mass, charge))
+          }
+        />
       )}
       <button
         type="button"

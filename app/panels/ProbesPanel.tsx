@@ -14,6 +14,8 @@ export function ProbesPanel() {
   const probes = useAppState((s) => s.probes);
   const selected = useAppState((s) => s.selectedProbe);
   const selectProbe = useAppState((s) => s.selectProbe);
+  const addProbe = useAppState((s) => s.addProbe);
+  const center = useAppState((s) => s.center);
   const probe = probes.find((candidate) => candidate.id === selected) ?? null;
 
   return (
@@ -41,6 +43,11 @@ export function ProbesPanel() {
           ))}
         </ul>
       )}
+      <div className="button-row">
+        <button type="button" onClick={() => addProbe(center)}>
+          Add a probe at the slice centre
+        </button>
+      </div>
       {probe && <ProbeDetails probe={probe} />}
     </section>
   );

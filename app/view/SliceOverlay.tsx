@@ -1,4 +1,4 @@
-import { type PointerEvent, useEffect, useRef, useState } from 'react';
+import { type KeyboardEvent, type PointerEvent, useEffect, useRef, useState } from 'react';
 import type { SliceSpec } from '../../src/engine/sliceSpec';
 import { SketchError, strokeToControls } from '../../src/path/sketchPath';
 import { useAppState } from '../hooks/useAppState';
@@ -145,6 +145,36 @@ export function SliceOverlay({ spec }: { spec: SliceSpec }) {
     state.setTime(end);
   };
 
+  // The keyboard's way round the view: arrows pan (or orbit in 3D), + and − zoom.
+  const onKeyDown = (event: KeyboardEvent<HTMLDivElement>) => {
+    if (event.target !== event.currentTarget) return;
+    const state = appStore.getState();
+    const step = event.shiftKey ? 0.25 : 0.05;
+    const moves: Record<string, [number, number]> = {
+      ArrowLeft: [-1, 0],
+      ArrowRight: [1, 0],
+      ArrowUp: [0, 1],
+      ArrowDown: [0, -1],
+    };
+    const move = moves[event.key];
+    if (move) {
+      event.preventDefault();
+      if (mode === '3d') {
+        const { azimuth, elevation } = state.orbit;
+        state.setOrbit({
+          azimuth: azimuth + move[0] * step * 2,
+          elevation: Math.min(1.55, Math.max(-1.55, elevation + move[1] * step * 2)),
+        });
+      } else state.panBy(move[0] * step * spec.width, move[1] * step * spec.height);
+    } else if (event.key === '+' || event.key === '=' || event.key === '-') {
+      event.preventDefault();
+      const factor = event.key === '-' ? WHEEL_ZOOM : 1 / WHEEL_ZOOM;
+      if (mode === '3d')
+        state.setOrbit({ distance: Math.min(20, Math.max(0.3, state.orbit.distance * factor)) });
+      else state.zoomAbout(factor, 0, 0);
+    }
+  };
+
   const sketchPoints =
     gesture?.kind === 'sketch'
       ? gesture.points
@@ -160,6 +190,15 @@ export function SliceOverlay({ spec }: { spec: SliceSpec }) {
       ref={ref}
       className={`slice-overlay tool-${mode === '3d' ? 'orbit' : tool}`}
       data-testid="slice-overlay"
+      role="application"
+      // biome-ignore lint/a11y/noNoninteractiveTabindex: the slice takes focus so the keyboard can pan and zoom it
+      tabIndex={0}
+      aria-label={
+        mode === '3d'
+          ? 'Slice in 3D: arrow keys orbit, + and − move closer or further'
+          : 'Slice: arrow keys pan, + and − zoom; Tab reaches probes and control points'
+      }
+      onKeyDown={onKeyDown}
       onPointerDown={onPointerDown}
       onPointerMove={onPointerMove}
       onPointerUp={onPointerUp}
