@@ -30,8 +30,14 @@ export const createHistorySlice: SliceCreator<HistorySlice> = (set, get) => {
     const { scenario, charges, probes } = get();
     return { label, scenario, charges, probes };
   };
+  // The selected charge stays in range when the restored document has fewer charges.
   const restore = (target: DocumentSnapshot) =>
-    set({ scenario: target.scenario, charges: target.charges, probes: target.probes });
+    set((state) => ({
+      scenario: target.scenario,
+      charges: target.charges,
+      probes: target.probes,
+      selectedCharge: Math.min(state.selectedCharge, Math.max(0, target.charges.length - 1)),
+    }));
   return {
     past: [],
     future: [],
