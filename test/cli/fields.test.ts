@@ -280,8 +280,10 @@ describe('conecast help', () => {
     for (const text of ['conecast <command>', 'fields', 'V/m', 'W/m^2', 'conecast help fields']) {
       expect(run.stdout).toContain(text);
     }
-    // Commands not built yet are not announced.
-    expect(run.stdout).not.toMatch(/\b(probe|power)\b/);
+    // Every command is listed with its summary.
+    for (const command of ['fields', 'slice', 'probe', 'power']) {
+      expect(run.stdout).toMatch(new RegExp(`^  ${command} +\\S`, 'm'));
+    }
   });
 
   it('describes every option, column and unit of fields', () => {

@@ -41,11 +41,11 @@ describe('main', () => {
   });
 
   it('answers an unknown command with one line', async () => {
-    for (const args of [['probe'], ['help', 'power'], ['--verbose']]) {
+    for (const args of [['sweep'], ['help', 'radiate'], ['--verbose']]) {
       const result = await run(args);
       expect(result.status).toBe(2);
       expect(result.stderr).toMatch(
-        /^conecast: unknown (command|option) "[^"]+"; commands: fields, slice; see "conecast --help"\n$/,
+        /^conecast: unknown (command|option) "[^"]+"; commands: fields, slice, probe, power; see "conecast --help"\n$/,
       );
     }
   });
