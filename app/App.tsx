@@ -1,4 +1,5 @@
 import { useRef, useState } from 'react';
+import { AnalysisPanel } from './analysis/AnalysisPanel';
 import { useAppState } from './hooks/useAppState';
 import { useShortcuts } from './hooks/useShortcuts';
 import { downloadScenario } from './io/scenarioDocument';
@@ -66,6 +67,7 @@ export function App() {
             <ColourBar />
           </div>
           <TimeBar />
+          <AnalysisPanel />
         </div>
         <aside className="side-panel side-right" aria-label="Probes, map and slice details">
           <ProbesPanel />

@@ -29,6 +29,9 @@ export function siExponent(value: number): number {
 export function formatSI(value: number, unit: string, digits = 3): string {
   if (!Number.isFinite(value)) return `${value} ${unit}`;
   if (value === 0) return `0 ${unit}`;
+  // Beyond the prefixes (below yocto, above yotta) plain powers of ten read better.
+  const magnitude = Math.abs(value);
+  if (magnitude < 1e-24 || magnitude >= 1e27) return `${value.toExponential(digits - 1)} ${unit}`;
   let exponent = siExponent(value);
   let mantissa = Number((value / 10 ** exponent).toPrecision(digits));
   // Rounding can carry 999.7 up to 1000: move to the next prefix instead.

@@ -1,4 +1,4 @@
-/** A unit a number can be typed in: its symbol and how many SI base units one of it is. */
+/** A unit a number can be typed in: its symbol and how many SI base units one of it is (lists run from small to large). */
 export interface UnitChoice {
   symbol: string;
   factor: number;
@@ -34,8 +34,8 @@ export const FREQUENCY_UNITS: UnitChoice[] = [
 export const ACCELERATION_UNITS: UnitChoice[] = [{ symbol: 'm/s²', factor: 1 }];
 export const ANGLE_UNITS: UnitChoice[] = [
   { symbol: 'mrad', factor: 1e-3 },
-  { symbol: 'rad', factor: 1 },
   { symbol: '°', factor: Math.PI / 180 },
+  { symbol: 'rad', factor: 1 },
 ];
 export const FIELD_UNITS: UnitChoice[] = [
   { symbol: 'mT', factor: 1e-3 },
@@ -51,7 +51,7 @@ export function unitFor(value: number, units: readonly UnitChoice[]): UnitChoice
   return best;
 }
 
-/** A value (SI) as typed text in `unit`, to 12 significant figures with no float tails. */
+/** A value (SI) as typed text in `unit`, to 9 significant figures with no float tails. */
 export function inUnit(value: number, unit: UnitChoice): string {
-  return String(Number((value / unit.factor).toPrecision(12)));
+  return String(Number((value / unit.factor).toPrecision(9)));
 }

@@ -1,4 +1,5 @@
 import type { StateCreator } from 'zustand/vanilla';
+import type { AnalysisSlice } from './analysisSlice';
 import type { DisplaySlice } from './displaySlice';
 import type { FieldSlice } from './fieldSlice';
 import type { HistorySlice } from './historySlice';
@@ -16,7 +17,8 @@ export type AppState = ScenarioSlice &
   DisplaySlice &
   TimeSlice &
   ToolSlice &
-  FieldSlice;
+  FieldSlice &
+  AnalysisSlice;
 
 /** A slice creator that sees (and may call into) the whole state. */
 export type SliceCreator<Slice> = StateCreator<AppState, [], [], Slice>;

@@ -1,4 +1,5 @@
 import { createStore } from 'zustand/vanilla';
+import { createAnalysisSlice } from './analysisSlice';
 import type { AppState } from './appState';
 import { createDisplaySlice } from './displaySlice';
 import { createFieldSlice } from './fieldSlice';
@@ -20,6 +21,7 @@ export function createAppStore() {
     ...createTimeSlice(...args),
     ...createToolSlice(...args),
     ...createFieldSlice(...args),
+    ...createAnalysisSlice(...args),
   }));
 }
 

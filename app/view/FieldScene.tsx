@@ -1,4 +1,5 @@
 import type { SliceSpec } from '../../src/engine/sliceSpec';
+import { usePatternSourceTime } from '../analysis/PatternView';
 import type { DisplayedMap } from '../field/displayedMap';
 import { shellSpacing } from '../field/lightConeShells';
 import { useAppState } from '../hooks/useAppState';
@@ -6,6 +7,7 @@ import { ArrowField } from './ArrowField';
 import { ChargeMarkers } from './ChargeMarkers';
 import { ChargePaths } from './ChargePaths';
 import { FieldPlane } from './FieldPlane';
+import { PatternSphere } from './PatternSphere';
 import { ProbeMarkers } from './ProbeMarkers';
 import { OrbitingCamera, TopDownCamera } from './SceneCamera';
 import { ShellLines } from './ShellLines';
@@ -30,6 +32,11 @@ export function FieldScene({ spec, shown, onDrawn }: FieldSceneProps) {
   const shells = useAppState((s) => s.shells);
   const mode = useAppState((s) => s.viewMode);
   const orbit = useAppState((s) => s.orbit);
+  const showSphere = useAppState(
+    (s) => s.viewMode === '3d' && s.analysisTab === 'pattern' && s.patternSphere,
+  );
+  const patternPer = useAppState((s) => s.patternPer);
+  const patternTime = usePatternSourceTime();
   const origin = spec.center;
   const markerRadius = 0.011 * Math.min(spec.width, spec.height);
 
@@ -67,6 +74,15 @@ export function FieldScene({ spec, shown, onDrawn }: FieldSceneProps) {
         radius={markerRadius}
       />
       <ChargeMarkers origin={origin} charges={charges} radius={markerRadius} time={time} />
+      {showSphere && charges[selectedCharge] && patternTime !== null && (
+        <PatternSphere
+          charge={charges[selectedCharge]}
+          sourceTime={patternTime}
+          per={patternPer}
+          origin={origin}
+          radius={0.2 * Math.min(spec.width, spec.height)}
+        />
+      )}
     </>
   );
 }

@@ -13,6 +13,8 @@ describe('formatSI', () => {
     [999.96e-9, 's', 4, '1.000 µs'],
     [-2.5e-6, 'm', 2, '-2.5 µm'],
     [0, 's', 3, '0 s'],
+    [3.2e-31, 'J/(m²·Hz)', 3, '3.20e-31 J/(m²·Hz)'],
+    [4e28, 'W', 2, '4.0e+28 W'],
     [12, 'V/m', 3, '12.0 V/m'],
   ])('%d %s to %d digits', (value, unit, digits, expected) => {
     expect(formatSI(value, unit, digits)).toBe(expected);
