@@ -51,7 +51,7 @@ export function unitFor(value: number, units: readonly UnitChoice[]): UnitChoice
   return best;
 }
 
-/** A value (SI) as typed text in `unit`, to 9 significant figures with no float tails. */
+/** A value (SI) as typed text in `unit`, to 10 significant figures (enough for the exact elementary charge) with no float tails. */
 export function inUnit(value: number, unit: UnitChoice): string {
-  return String(Number((value / unit.factor).toPrecision(9)));
+  return String(Number((value / unit.factor).toPrecision(10)));
 }
