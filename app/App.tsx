@@ -1,7 +1,9 @@
 import { useRef, useState } from 'react';
 import { AnalysisPanel } from './analysis/AnalysisPanel';
 import { useAppState } from './hooks/useAppState';
+import { useScenarioDrop } from './hooks/useScenarioDrop';
 import { useShortcuts } from './hooks/useShortcuts';
+import { openScenarioFile } from './io/openScenarioFile';
 import { downloadScenario } from './io/scenarioDocument';
 import { CAUTIONS_ID, Cautions } from './panels/Cautions';
 import { ChargesPanel } from './panels/ChargesPanel';
@@ -11,6 +13,7 @@ import { MapPanel } from './panels/MapPanel';
 import { ProbesPanel } from './panels/ProbesPanel';
 import { Readouts } from './panels/Readouts';
 import { ScenarioSummary } from './panels/ScenarioSummary';
+import { SliceExport } from './panels/SliceExport';
 import { TimeBar } from './panels/TimeBar';
 import { Toolbar } from './panels/Toolbar';
 import { appStore } from './store/appStore';
@@ -18,6 +21,7 @@ import { FieldView } from './view/FieldView';
 
 export function App() {
   useShortcuts();
+  useScenarioDrop();
   const fieldError = useAppState((s) => s.fieldError);
   const fieldFault = useAppState((s) => s.fieldFault);
   const hasScenario = useAppState((s) => s.scenario !== null);
@@ -29,6 +33,20 @@ export function App() {
       <header className="app-header">
         <h1 className="app-name">Conecast</h1>
         <span className="app-tagline">retarded-time fields of moving point charges</span>
+        <label className="header-button header-plain file-button">
+          Open scenario…
+          <input
+            type="file"
+            accept=".json,application/json"
+            className="visually-hidden"
+            data-testid="open-scenario"
+            onChange={(event) => {
+              const file = event.currentTarget.files?.[0];
+              if (file) void openScenarioFile(file);
+              event.currentTarget.value = '';
+            }}
+          />
+        </label>
         <button
           type="button"
           className="header-button header-plain"
@@ -88,6 +106,7 @@ export function App() {
               Slice details
             </h2>
             <Readouts />
+            <SliceExport />
             <MapLegend />
           </section>
         </aside>

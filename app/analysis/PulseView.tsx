@@ -1,6 +1,8 @@
 import { useMemo } from 'react';
+import { seriesToCsv } from '../../src/io/probeCsv';
 import { TIME_UNITS } from '../format/units';
 import { useAppState } from '../hooks/useAppState';
+import { download, fileStem } from '../io/download';
 import { NumberField } from '../panels/fields/NumberField';
 import type { PulseQuantity } from '../store/analysisSlice';
 import { LineChart } from './LineChart';
@@ -77,7 +79,20 @@ export function PulseView() {
       ) : (
         <>
           <p className="muted sampling-note" data-testid="sampling-note">
-            Probe {pulse.probe.name}: {pulse.sampling.samples} samples. {pulse.sampling.reason}
+            Probe {pulse.probe.name}: {pulse.sampling.samples} samples. {pulse.sampling.reason}{' '}
+            <button
+              type="button"
+              className="link-button"
+              onClick={() =>
+                download(
+                  `probe-${fileStem(pulse.probe.name)}-series.csv`,
+                  seriesToCsv(pulse.series),
+                  'text/csv',
+                )
+              }
+            >
+              Save the series as CSV
+            </button>
           </p>
           <LineChart
             label={`${quantity} at probe ${pulse.probe.name} against observer time, ${UNITS[quantity]}`}

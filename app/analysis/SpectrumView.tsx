@@ -1,7 +1,9 @@
 import { useMemo } from 'react';
 import { energySpectrum, SPECTRUM_WINDOWS, type SpectrumWindow } from '../../src/analysis/spectrum';
+import { spectrumToCsv } from '../../src/io/probeCsv';
 import { formatSI } from '../format/siFormat';
 import { useAppState } from '../hooks/useAppState';
+import { download, fileStem } from '../io/download';
 import { LineChart } from './LineChart';
 import { spectrumMarks } from './spectrumMarks';
 import { usePulse } from './usePulse';
@@ -78,7 +80,20 @@ export function SpectrumView() {
           <p className="muted sampling-note">
             Probe {pulse.probe.name}, energy per unit area per unit frequency (one-sided),
             {` ${spectrum.f.length} bins of ${formatSI(spectrum.df, 'Hz')}`}.
-            {marks.length > 0 && ' Dashed: the frequency the path predicts.'}
+            {marks.length > 0 && ' Dashed: the frequency the path predicts.'}{' '}
+            <button
+              type="button"
+              className="link-button"
+              onClick={() =>
+                download(
+                  `probe-${fileStem(pulse.probe.name)}-spectrum.csv`,
+                  spectrumToCsv(spectrum),
+                  'text/csv',
+                )
+              }
+            >
+              Save the spectrum as CSV
+            </button>
           </p>
           <LineChart
             label={`Energy spectral density at probe ${pulse.probe.name}, ${UNIT}, against frequency in Hz`}

@@ -1,6 +1,7 @@
 import { chooseSampling, probeSeries } from '../../analysis/probeSeries';
 import { energySpectrum, SPECTRUM_WINDOWS, type SpectrumWindow } from '../../analysis/spectrum';
 import type { Triple } from '../../engine/sliceSpec';
+import { PROBE_HEADER, probeRow, SPECTRUM_HEADER, spectrumRow } from '../../io/probeCsv';
 import { type OptionSpecs, parseArgs } from '../args';
 import { type CliIo, type Command, EXIT_OK } from '../command';
 import { LineWriter } from '../output';
@@ -8,7 +9,7 @@ import { readScenarioOrCharges } from '../readCharges';
 import { parseList } from '../sliceOptions';
 import { UsageError } from '../usageError';
 import { parseNumberOption } from '../values';
-import { PROBE_HEADER, PROBE_HELP, PROBE_SUMMARY, SPECTRUM_HEADER } from './probeHelp';
+import { PROBE_HELP, PROBE_SUMMARY } from './probeHelp';
 
 const OPTIONS: OptionSpecs = {
   trajectory: { value: true, repeat: true },
@@ -92,15 +93,10 @@ async function runProbe(argv: readonly string[], io: CliIo): Promise<number> {
   if (spectrum) {
     const result = energySpectrum(series, windowText as SpectrumWindow);
     await out.line(SPECTRUM_HEADER);
-    for (let k = 0; k < result.f.length; k++)
-      await out.line(`${result.f[k]},${result.energyDensity[k]}`);
+    for (let k = 0; k < result.f.length; k++) await out.line(spectrumRow(result, k));
   } else {
     await out.line(PROBE_HEADER);
-    for (let k = 0; k < series.t.length; k++) {
-      await out.line(
-        `${series.t[k]},${series.ex[k]},${series.ey[k]},${series.ez[k]},${series.bx[k]},${series.by[k]},${series.bz[k]},${series.sx[k]},${series.sy[k]},${series.sz[k]}`,
-      );
-    }
+    for (let k = 0; k < series.t.length; k++) await out.line(probeRow(series, k));
   }
   await out.flush();
   return EXIT_OK;

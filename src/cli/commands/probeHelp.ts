@@ -1,7 +1,6 @@
 export const PROBE_SUMMARY = 'what a probe records over an observer-time window, or its spectrum';
 
-export const PROBE_HEADER = 't,Ex,Ey,Ez,Bx,By,Bz,Sx,Sy,Sz';
-export const SPECTRUM_HEADER = 'f_Hz,energy_spectral_density_J_per_m2_Hz';
+import { PROBE_HEADER, SPECTRUM_HEADER } from '../../io/probeCsv';
 
 export const PROBE_HELP = `conecast probe: ${PROBE_SUMMARY}
 
