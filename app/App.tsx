@@ -10,6 +10,7 @@ import { ChargesPanel } from './panels/ChargesPanel';
 import { ColourBar } from './panels/ColourBar';
 import { MapLegend } from './panels/MapLegend';
 import { MapPanel } from './panels/MapPanel';
+import { PictureExport } from './panels/PictureExport';
 import { ProbesPanel } from './panels/ProbesPanel';
 import { Readouts } from './panels/Readouts';
 import { ScenarioSummary } from './panels/ScenarioSummary';
@@ -107,6 +108,7 @@ export function App() {
             </h2>
             <Readouts />
             <SliceExport />
+            <PictureExport />
             <MapLegend />
           </section>
         </aside>

@@ -198,3 +198,50 @@ test('a scenario file opens from the picker, and a broken one is named without l
   await snapshot(page, '19-broken-scenario-refused');
   expect(errors).toEqual([]);
 });
+
+test('the picture for a report decodes at the width asked for, with its colour bar', async ({
+  page,
+}) => {
+  const errors = collectErrors(page);
+  await page.getByLabel('Picture width').selectOption('2400');
+  await page.getByLabel('Picture background').selectOption('light');
+  const [png] = await downloadsOf(
+    page,
+    () => page.getByRole('button', { name: 'Save picture (PNG)' }).click(),
+    1,
+  );
+  const bytes = readFileSync(png).toString('base64');
+  const found = await page.evaluate(async (data) => {
+    const blob = await (await fetch(`data:image/png;base64,${data}`)).blob();
+    const image = await createImageBitmap(blob);
+    const canvas = document.createElement('canvas');
+    canvas.width = image.width;
+    canvas.height = image.height;
+    const context = canvas.getContext('2d');
+    if (context === null) throw new Error('no 2D context');
+    context.drawImage(image, 0, 0);
+    // Where renderPicture puts the colour bar: the layout scales with width / 1200.
+    const u = image.width / 1200;
+    const left = 90 * u;
+    const plotWidth = image.width - left - 220 * u;
+    const top = (70 + 22 * 2) * u;
+    const plotHeight = plotWidth; // the demo's slice is square
+    const barX = Math.round(left + plotWidth + 54 * u);
+    const column = context.getImageData(barX, Math.round(top), 1, Math.round(plotHeight)).data;
+    const colours = new Set<number>();
+    for (let p = 0; p < column.length; p += 4)
+      colours.add((column[p] << 16) | (column[p + 1] << 8) | column[p + 2]);
+    const corner = context.getImageData(image.width - 5, 5, 1, 1).data;
+    return {
+      width: image.width,
+      height: image.height,
+      barColours: colours.size,
+      corner: Array.from(corner),
+    };
+  }, bytes);
+  expect(found.width).toBe(2400);
+  expect(found.height).toBeGreaterThan(2000);
+  expect(found.barColours).toBeGreaterThan(100);
+  expect(found.corner).toEqual([255, 255, 255, 255]);
+  expect(errors).toEqual([]);
+});
