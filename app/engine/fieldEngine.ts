@@ -57,9 +57,10 @@ export function startFieldEngine(
     const onCoarse = (coarse: FieldMap) => {
       const shown = store.getState().fieldMap;
       // A coarse pass never replaces a full map of the same slice.
-      if (mine === generation && (shown === null || shown.coarse || shown.spec !== wanted))
-        store.getState().setFieldState({ fieldMap: coarse });
+      const show = mine === generation && (shown === null || shown.coarse || shown.spec !== wanted);
+      // The next request goes to the workers first, so they compute while this map is drawn.
       coarseDone();
+      if (show) store.getState().setFieldState({ fieldMap: coarse });
     };
     computeFieldMap(pool, wanted, charges, onCoarse, !full)
       .then((map) => {
