@@ -1,9 +1,9 @@
 import { MASK_CLEAR, planeOf, type SliceFields } from '../../src/engine/slicePlanes';
 import type { SliceSpec } from '../../src/engine/sliceSpec';
+import type { ArrowQuantity } from '../../src/io/mapSettings';
 import { VACUUM_PERMEABILITY } from '../../src/physics/constants';
 
-/** Vector fields the arrows can show: E, its radiation part, or the Poynting vector. */
-export type ArrowQuantity = 'E' | 'Erad' | 'S';
+export type { ArrowQuantity } from '../../src/io/mapSettings';
 
 /** Quantiles of the lattice's |v| that the arrow lengths span, on a log scale. */
 export const ARROW_QUANTILES = { low: 0.05, high: 0.99 } as const;

@@ -1,4 +1,5 @@
 import { MASK_CLEAR, planeOf, type SliceFields } from '../../src/engine/slicePlanes';
+import type { FieldComponent, MapSettings } from '../../src/io/mapSettings';
 import { VACUUM_PERMEABILITY } from '../../src/physics/constants';
 import type { ValueRange } from './fieldMap';
 
@@ -8,38 +9,19 @@ import type { ValueRange } from './fieldMap';
  */
 export const COLOUR_QUANTILES = { low: 0.01, high: 0.995 } as const;
 
-/** What the map shows: a magnitude, one signed component, or the retarded time. */
-export type MapQuantity = 'E' | 'B' | 'S' | 'Erad' | 'component' | 'retardedTime';
-
-export const FIELD_COMPONENTS = [
-  'Ex',
-  'Ey',
-  'Ez',
-  'Bx',
-  'By',
-  'Bz',
-  'Sx',
-  'Sy',
-  'Sz',
-  'Ex_rad',
-  'Ey_rad',
-  'Ez_rad',
-] as const;
-export type FieldComponent = (typeof FIELD_COMPONENTS)[number];
-
-export type ScaleKind = 'log' | 'linear';
+export {
+  FIELD_COMPONENTS,
+  type FieldComponent,
+  type MapQuantity,
+  type ScaleKind,
+} from '../../src/io/mapSettings';
 
 /**
  * How the map is shown. For signed quantities a range means: the scale spans −max … max and
  * min is the smallest |value| a log scale resolves (its threshold). Ranges are typed in
  * display terms, i.e. with QuantityValues.offset added.
  */
-export interface MapDisplay {
-  quantity: MapQuantity;
-  component: FieldComponent;
-  scale: ScaleKind;
-  range: 'auto' | { min: number; max: number };
-}
+export type MapDisplay = Pick<MapSettings, 'quantity' | 'component' | 'scale' | 'range'>;
 
 /** One quantity per point of a slice, with what the colour scale needs to know about it. */
 export interface QuantityValues {

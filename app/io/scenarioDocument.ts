@@ -1,5 +1,7 @@
 import type { Scenario } from '../../src/io/scenario';
+import { formatScenario } from '../../src/io/scenarioText';
 import type { AppState } from '../store/appState';
+import { mapSettingsOf } from '../store/displaySlice';
 import { download, fileStem } from './download';
 
 /** The open scenario with the view and time as they are now: what a saved file holds. */
@@ -14,6 +16,8 @@ export function scenarioDocument(state: AppState): Scenario | null {
       resolution: [...state.resolution],
       time: state.time,
     },
+    probes: state.probes.map((probe) => ({ name: probe.name, position: [...probe.position] })),
+    display: mapSettingsOf(state),
   };
 }
 
@@ -21,9 +25,5 @@ export function scenarioDocument(state: AppState): Scenario | null {
 export function downloadScenario(state: AppState): void {
   const document_ = scenarioDocument(state);
   if (document_ === null) return;
-  download(
-    `${fileStem(document_.title)}.json`,
-    `${JSON.stringify(document_, null, 2)}\n`,
-    'application/json',
-  );
+  download(`${fileStem(document_.title)}.json`, formatScenario(document_), 'application/json');
 }

@@ -1,3 +1,4 @@
+import { defaultMapSettings, type MapSettings } from '../../src/io/mapSettings';
 import type { ArrowQuantity } from '../field/arrowLattice';
 import type { MapDisplay } from '../field/mapQuantity';
 import type { SliceCreator } from './appState';
@@ -14,10 +15,23 @@ export interface DisplaySlice {
 }
 
 export const createDisplaySlice: SliceCreator<DisplaySlice> = (set) => ({
-  display: { quantity: 'E', component: 'Ey', scale: 'log', range: 'auto' },
-  arrows: 'off',
-  shells: true,
+  ...displayStateOf(defaultMapSettings()),
   setDisplay: (change) => set((state) => ({ display: { ...state.display, ...change } })),
   setArrows: (arrows) => set({ arrows }),
   setShells: (shells) => set({ shells }),
 });
+
+/** The display slice's fields for a scenario's map settings. */
+export function displayStateOf(
+  settings: MapSettings,
+): Pick<DisplaySlice, 'display' | 'arrows' | 'shells'> {
+  const { arrows, shells, quantity, component, scale, range } = settings;
+  return { display: { quantity, component, scale, range }, arrows, shells };
+}
+
+/** The map settings a saved scenario records. */
+export function mapSettingsOf(
+  state: Pick<DisplaySlice, 'display' | 'arrows' | 'shells'>,
+): MapSettings {
+  return { ...state.display, arrows: state.arrows, shells: state.shells };
+}

@@ -18,6 +18,8 @@ export interface ProbesSlice {
   renameProbe(id: string, name: string): void;
   removeProbe(id: string): void;
   selectProbe(id: string | null): void;
+  /** Replaces every probe with a document's (no undo step: opening a document clears undo). */
+  replaceProbes(probes: readonly { name: string; position: Triple }[]): void;
 }
 
 let nextProbe = 1;
@@ -29,7 +31,7 @@ export const createProbesSlice: SliceCreator<ProbesSlice> = (set, get) => ({
     const taken = new Set(get().probes.map((probe) => probe.name));
     let n = get().probes.length + 1;
     while (taken.has(`P${n}`)) n++;
-    const probe: Probe = { id: `probe-${nextProbe++}`, name: `P${n}`, position: [...position] };
+    const probe: Probe = { id: newProbeId(), name: `P${n}`, position: [...position] };
     get().record('place a probe');
     set((state) => ({ probes: [...state.probes, probe], selectedProbe: probe.id }));
     return probe.id;
@@ -61,4 +63,16 @@ export const createProbesSlice: SliceCreator<ProbesSlice> = (set, get) => ({
     }));
   },
   selectProbe: (id) => set({ selectedProbe: id }),
+  replaceProbes: (probes) => {
+    const next = probes.map((probe) => ({
+      id: newProbeId(),
+      name: probe.name,
+      position: [...probe.position] as Triple,
+    }));
+    set({ probes: next, selectedProbe: next[0]?.id ?? null });
+  },
 });
+
+function newProbeId(): string {
+  return `probe-${nextProbe++}`;
+}

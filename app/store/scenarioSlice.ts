@@ -9,11 +9,16 @@ import {
 import type { Charge } from '../../src/physics/charge';
 import { observationSpan, suggestedRate } from '../scenario/timeSpan';
 import type { SliceCreator } from './appState';
+import { displayStateOf } from './displaySlice';
 import { selectSliceSpec } from './sliceSpecOf';
 
 export type ScenarioStatus = 'empty' | 'loading' | 'ready' | 'failed';
 
 export interface ScenarioSlice {
+  /**
+   * The open document. Its view, probes and display are as opened: the live ones are in the
+   * view, time, probes and display slices, and scenarioDocument() puts them together.
+   */
   scenario: Scenario | null;
   /** The scenario as it was opened, so the summary can say when it has been edited. */
   openedScenario: Scenario | null;
@@ -27,8 +32,13 @@ export interface ScenarioSlice {
   /** One line naming what is wrong, when the status is 'failed'. */
   scenarioError: string | null;
   beginScenarioLoad(source: string): void;
-  /** Parses and builds a scenario document; on success also shows its view and time. */
+  /** Parses and builds a scenario document; on success opens it (see openScenarioDocument). */
   applyScenarioText(text: string, source: string): void;
+  /**
+   * Opens a checked document: its charges (built here unless given), probes, map settings,
+   * view and time replace what is open, and undo starts afresh.
+   */
+  openScenarioDocument(scenario: Scenario, source: string, charges?: Charge[]): void;
   failScenarioLoad(source: string, message: string): void;
   /**
    * Replaces the charges after checking them as a whole scenario. Returns null when applied,
@@ -60,6 +70,9 @@ export const createScenarioSlice: SliceCreator<ScenarioSlice> = (set, get) => ({
       get().failScenarioLoad(source, error.message);
       return;
     }
+    get().openScenarioDocument(scenario, source, charges);
+  },
+  openScenarioDocument: (scenario, source, charges = buildCharges(scenario)) => {
     set({
       scenario,
       openedScenario: scenario,
@@ -70,6 +83,8 @@ export const createScenarioSlice: SliceCreator<ScenarioSlice> = (set, get) => ({
       scenarioError: null,
     });
     get().clearHistory();
+    get().replaceProbes(scenario.probes);
+    set(displayStateOf(scenario.display));
     get().showView(scenario.view);
     get().setTime(scenario.view.time);
     const span = observationSpan(charges, selectSliceSpec(get()));

@@ -1,6 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { appStore } from '../../app/store/appStore';
+import { scenarioDocument } from '../../app/io/scenarioDocument';
+import { appStore, createAppStore } from '../../app/store/appStore';
+import { formatScenario } from '../../src/io/scenarioText';
 
 const demo = readFileSync(new URL('../../public/scenarios/demo.json', import.meta.url), 'utf8');
 
@@ -23,6 +25,36 @@ describe('the app store', () => {
     expect(state.scenarioStatus).toBe('failed');
     expect(state.scenarioError).toBe('charges[0].path.params.beta: must be below 1');
     expect(state.charges).toHaveLength(1);
+  });
+
+  it('saves probes and map settings in the document and opens them again', () => {
+    const store = createAppStore();
+    store.getState().applyScenarioText(demo, 'demo.json');
+    store.getState().addProbe([0.05, 0.02, 0]);
+    store.getState().setDisplay({ quantity: 'component', component: 'Bz', scale: 'linear' });
+    store.getState().setArrows('S');
+    store.getState().setShells(false);
+    store.getState().setTime(1.2e-9);
+    const saved = formatScenario(scenarioDocument(store.getState())!);
+
+    const fresh = createAppStore();
+    fresh.getState().applyScenarioText(saved, 'saved.json');
+    const state = fresh.getState();
+    expect(state.probes.map((probe) => [probe.name, probe.position])).toEqual([
+      ['P1', [0.05, 0.02, 0]],
+    ]);
+    expect(state.selectedProbe).toBe(state.probes[0].id);
+    expect(state.display).toEqual({
+      quantity: 'component',
+      component: 'Bz',
+      scale: 'linear',
+      range: 'auto',
+    });
+    expect(state.arrows).toBe('S');
+    expect(state.shells).toBe(false);
+    expect(state.time).toBe(1.2e-9);
+    // Saved again unchanged, the document is the same text.
+    expect(formatScenario(scenarioDocument(state)!)).toBe(saved);
   });
 
   it('ignores a time that is not a number', () => {

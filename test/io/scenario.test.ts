@@ -16,7 +16,7 @@ const c = SPEED_OF_LIGHT;
 function base(): Record<string, unknown> {
   return {
     format: 'conecast-scenario',
-    version: 1,
+    version: 2,
     title: 'test',
     invented: true,
     note: '',
@@ -35,6 +35,15 @@ function base(): Record<string, unknown> {
       },
     ],
     view: { plane: 'xy', center: [0, 0, 0], size: [0.2, 0.1], resolution: [40, 20], time: 5e-10 },
+    probes: [{ name: 'P1', position: [0.05, 0, 0] }],
+    display: {
+      quantity: 'E',
+      component: 'Ey',
+      scale: 'log',
+      range: 'auto',
+      arrows: 'off',
+      shells: true,
+    },
   };
 }
 
@@ -135,9 +144,33 @@ describe('parseScenario rejects, naming the field', () => {
     [['view', 'resolution', 0], 10_000, 'view.resolution[0]: must be at most 8192'],
     [['view', 'center'], [0, 0], 'view.center: must hold at least 3 values'],
     [['view', 'time'], Number.NaN, 'view.time: must be a number'],
-    [['format'], 'something-else', 'format: must be "conecast-scenario"'],
-    [['version'], 2, 'version: 2 is not supported; this build reads version 1'],
-    [['version'], '1', 'version: must be 1'],
+    [
+      ['format'],
+      'something-else',
+      'format: must be "conecast-scenario" (is this a Conecast scenario?)',
+    ],
+    [
+      ['version'],
+      3,
+      'version: 3 was written by a newer Conecast; this build reads versions 1 to 2: update Conecast to open it',
+    ],
+    [['version'], '2', 'version: must be a whole number; this build reads versions 1 to 2'],
+    [
+      ['version'],
+      0,
+      'version: 0 is not a Conecast scenario version; this build reads versions 1 to 2',
+    ],
+    [
+      ['probes', 0],
+      { name: 'P1', position: [0, 0] },
+      'probes[0].position: must hold at least 3 values',
+    ],
+    [['display'], { quantity: 'E' }, 'display.component: is missing'],
+    [
+      ['display', 'quantity'],
+      'H',
+      'display.quantity: must be "E" or "B" or "S" or "Erad" or "component" or "retardedTime"',
+    ],
   ])('%j = %j', (path, value, expected) => {
     expect(messageOf(withField(path, value))).toBe(expected);
   });

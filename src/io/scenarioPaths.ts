@@ -1,0 +1,87 @@
+import type { z } from 'zod';
+import { type AnalyticMotion, sampleMotion } from '../path/analyticMotion';
+import { ExpressionError, expressionColumns } from '../path/expressionPath';
+import {
+  brakingToRest,
+  circularOrbit,
+  constantProperAcceleration,
+  lineOscillation,
+  transverseKick,
+  undulatorWiggle,
+  uniformMotion,
+} from '../path/presets';
+import { PathError, SampledPath } from '../path/sampledPath';
+import { SketchError, sketchColumns } from '../path/sketchPath';
+import type { ScenarioPath } from './scenario';
+import { fieldPath, ScenarioError } from './scenarioError';
+import { type presetPathSchema, sketchIssuePath } from './scenarioSchema';
+
+/**
+ * Paths already built, by document object: documents are never mutated, so an edit that
+ * leaves a path alone (a probe moved, another charge changed) reuses its samples instead of
+ * sampling a formula or solving a million-point spline again.
+ */
+const built = new WeakMap<ScenarioPath, SampledPath>();
+
+/** The sampled path of one scenario path; `where` names it in errors (`charges[0].path`). */
+export function buildPath(path: ScenarioPath, where: string): SampledPath {
+  const known = built.get(path);
+  if (known !== undefined) return known;
+  const result = samplePath(path, where);
+  built.set(path, result);
+  return result;
+}
+
+/** Lets a path built elsewhere (an import worker) stand for its document object. */
+export function rememberBuiltPath(path: ScenarioPath, sampled: SampledPath): void {
+  built.set(path, sampled);
+}
+
+function samplePath(path: ScenarioPath, where: string): SampledPath {
+  try {
+    switch (path.kind) {
+      case 'samples':
+        return new SampledPath(path);
+      case 'preset':
+        return new SampledPath(sampleMotion(presetMotion(path), path.from, path.to, path.samples));
+      case 'sketch':
+        return new SampledPath(
+          sketchColumns(path.controls, path.speed, path.startTime, path.samples),
+        );
+      case 'expression':
+        return new SampledPath(expressionColumns(path, path.from, path.to, path.samples));
+    }
+  } catch (error) {
+    if (error instanceof PathError) {
+      // Speed errors concern the whole path ('v'); the others name a real column.
+      const column = path.kind === 'samples' && error.column !== 'v' ? `.${error.column}` : '';
+      throw new ScenarioError(where + column, error.message);
+    }
+    if (error instanceof SketchError) {
+      throw new ScenarioError(`${where}.${fieldPath(sketchIssuePath(error))}`, error.message);
+    }
+    if (error instanceof ExpressionError) {
+      throw new ScenarioError(`${where}.${error.field}`, error.detail);
+    }
+    throw error;
+  }
+}
+
+function presetMotion(path: z.infer<typeof presetPathSchema>): AnalyticMotion {
+  switch (path.preset) {
+    case 'circularOrbit':
+      return circularOrbit(path.params.radius, path.params.beta);
+    case 'uniformMotion':
+      return uniformMotion(path.params.beta);
+    case 'lineOscillation':
+      return lineOscillation(path.params.amplitude, path.params.frequency);
+    case 'constantProperAcceleration':
+      return constantProperAcceleration(path.params.alpha);
+    case 'brakingToRest':
+      return brakingToRest(path.params.beta0, path.params.stopTime);
+    case 'undulatorWiggle':
+      return undulatorWiggle(path.params.gamma, path.params.strength, path.params.period);
+    case 'transverseKick':
+      return transverseKick(path.params.beta, path.params.angle, path.params.duration);
+  }
+}
