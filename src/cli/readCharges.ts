@@ -1,11 +1,34 @@
 import { InputError } from '../io/inputError';
 import { readTextFile } from '../io/readTextFile';
 import { buildCharges, parseScenarioText, type Scenario, ScenarioError } from '../io/scenario';
+import {
+  isLengthUnit,
+  isTimeUnit,
+  LENGTH_UNITS,
+  TIME_UNITS,
+  type TrajectoryUnits,
+} from '../io/trajectoryUnits';
 import { readTrajectory } from '../path/trajectoryCsv';
 import type { Charge } from '../physics/charge';
-import type { ParsedArgs } from './args';
+import type { OptionSpecs, ParsedArgs } from './args';
 import { UsageError } from './usageError';
 import { parseCharge } from './values';
+
+/** The options every command takes to name its charges. */
+export const CHARGE_OPTIONS: OptionSpecs = {
+  trajectory: { value: true, repeat: true },
+  charge: { value: true, repeat: true },
+  scenario: { value: true },
+  'length-unit': { value: true },
+  'time-unit': { value: true },
+};
+
+/** Help lines for the unit options, shared by every command. */
+export const UNIT_OPTIONS_HELP = `  --length-unit U    unit of the trajectory files' x, y, z (and of velocities and
+                     accelerations, with --time-unit): ${Object.keys(LENGTH_UNITS).join(', ')};
+                     default m
+  --time-unit U      unit of the trajectory files' t: ${Object.keys(TIME_UNITS).join(', ')};
+                     default s`;
 
 /** A scenario file named by --scenario, read, checked and built. */
 export interface LoadedScenario {
@@ -27,6 +50,11 @@ export function readScenarioOption(args: ParsedArgs): LoadedScenario | undefined
   if (args.has('trajectory') || args.has('charge')) {
     throw new UsageError(
       'give the charges either with --scenario FILE.json or with --trajectory and --charge, not both',
+    );
+  }
+  if (args.has('length-unit') || args.has('time-unit')) {
+    throw new UsageError(
+      '--length-unit and --time-unit apply to trajectory files; a scenario is always in SI units',
     );
   }
   const text = readTextFile(file);
@@ -70,5 +98,23 @@ export function readCharges(args: ParsedArgs): Charge[] {
     );
   }
   const values = chargeTexts.map((text) => parseCharge(text, '--charge'));
-  return trajectories.map((file, k) => ({ charge: values[k], path: readTrajectory(file) }));
+  const units = trajectoryUnits(args);
+  return trajectories.map((file, k) => ({ charge: values[k], path: readTrajectory(file, units) }));
+}
+
+/** The units of --length-unit and --time-unit, SI where absent. */
+function trajectoryUnits(args: ParsedArgs): TrajectoryUnits {
+  const length = args.one('length-unit') ?? 'm';
+  const time = args.one('time-unit') ?? 's';
+  if (!isLengthUnit(length)) {
+    throw new UsageError(
+      `--length-unit "${length}" is not one of ${Object.keys(LENGTH_UNITS).join(', ')}`,
+    );
+  }
+  if (!isTimeUnit(time)) {
+    throw new UsageError(
+      `--time-unit "${time}" is not one of ${Object.keys(TIME_UNITS).join(', ')}`,
+    );
+  }
+  return { length, time };
 }

@@ -2,51 +2,86 @@ import type { CsvSchema, CsvTable } from '../io/csvTable';
 import { parseCsvTable } from '../io/csvTable';
 import { InputError } from '../io/inputError';
 import { readTextFile } from '../io/readTextFile';
+import { LENGTH_UNITS, SI_UNITS, TIME_UNITS, type TrajectoryUnits } from '../io/trajectoryUnits';
+import { SPEED_OF_LIGHT } from '../physics/constants';
 import { type PathColumns, PathError, SampledPath } from './sampledPath';
 
 const VELOCITY = ['vx', 'vy', 'vz'] as const;
 const ACCELERATION = ['ax', 'ay', 'az'] as const;
+/** Momentum per mass and c: βγ = γv/c along each axis (dimensionless). */
+const MOMENTUM = ['bgx', 'bgy', 'bgz'] as const;
 
-/** Trajectory CSV columns: t (s), x, y, z (m); vx, vy, vz (m/s) and ax, ay, az (m/s²) optional. */
+/**
+ * Trajectory CSV columns: t, x, y, z required; velocities as vx, vy, vz or as βγ in
+ * bgx, bgy, bgz (one or the other), and ax, ay, az, optional. SI unless units are given.
+ */
 export const TRAJECTORY_SCHEMA: CsvSchema = {
   required: ['t', 'x', 'y', 'z'],
-  optional: [...VELOCITY, ...ACCELERATION],
+  optional: [...VELOCITY, ...MOMENTUM, ...ACCELERATION],
 };
 
 /** Reads a trajectory CSV file into a path; every error names the file, line and column. */
-export function readTrajectory(path: string): SampledPath {
-  return parseTrajectory(readTextFile(path), path);
+export function readTrajectory(path: string, units: TrajectoryUnits = SI_UNITS): SampledPath {
+  return parseTrajectory(readTextFile(path), path, units);
 }
 
 /** Parses trajectory CSV text; `file` only names the source in error messages. */
-export function parseTrajectory(text: string, file: string): SampledPath {
-  return trajectoryFromTable(parseCsvTable(text, file, TRAJECTORY_SCHEMA));
+export function parseTrajectory(
+  text: string,
+  file: string,
+  units: TrajectoryUnits = SI_UNITS,
+): SampledPath {
+  return trajectoryFromTable(parseCsvTable(text, file, TRAJECTORY_SCHEMA), units);
 }
 
-/** Builds the path from a parsed table, turning the path's sample errors into file lines. */
-export function trajectoryFromTable(table: CsvTable): SampledPath {
+/**
+ * Builds the path from a parsed table, in SI: t × time unit, positions × length unit,
+ * velocities × length/time, accelerations × length/time², βγ turned into v = cβγ/√(1 + |βγ|²).
+ * The path's sample errors are turned into file lines. The table's columns are scaled in place.
+ */
+export function trajectoryFromTable(
+  table: CsvTable,
+  units: TrajectoryUnits = SI_UNITS,
+): SampledPath {
+  return buildTrajectory(table, trajectoryColumns(table, units));
+}
+
+/** The SI columns a table describes, checked for complete groups; scales the table in place. */
+export function trajectoryColumns(table: CsvTable, units: TrajectoryUnits = SI_UNITS): PathColumns {
   if (table.rowCount === 0) {
     throw InputError.at(table.file, 0, '', 'no samples: a trajectory needs at least one data row');
   }
+  const metres = LENGTH_UNITS[units.length];
+  const seconds = TIME_UNITS[units.time];
   const columns: PathColumns = {
-    t: table.column('t'),
-    x: table.column('x'),
-    y: table.column('y'),
-    z: table.column('z'),
+    t: scaled(table.column('t'), seconds),
+    x: scaled(table.column('x'), metres),
+    y: scaled(table.column('y'), metres),
+    z: scaled(table.column('z'), metres),
   };
-  for (const group of [VELOCITY, ACCELERATION]) {
-    const missing = group.filter((name) => !table.has(name));
-    if (missing.length === 3) continue;
-    if (missing.length > 0) {
-      throw InputError.at(
-        table.file,
-        table.headerLine,
-        missing,
-        `missing; ${group.join(', ')} must be given together or not at all`,
-      );
-    }
-    for (const name of group) columns[name] = table.column(name);
+  const groups = [VELOCITY, MOMENTUM, ACCELERATION].filter((group) => completeGroup(table, group));
+  if (groups.includes(VELOCITY) && groups.includes(MOMENTUM)) {
+    throw InputError.at(
+      table.file,
+      table.headerLine,
+      [...VELOCITY, ...MOMENTUM],
+      'give the velocity once: as vx, vy, vz or as βγ in bgx, bgy, bgz, not both',
+    );
   }
+  if (groups.includes(VELOCITY)) {
+    const speed = metres / seconds;
+    for (const name of VELOCITY) columns[name] = scaled(table.column(name), speed);
+  }
+  if (groups.includes(MOMENTUM)) Object.assign(columns, velocitiesFromMomentum(table));
+  if (groups.includes(ACCELERATION)) {
+    const acceleration = metres / (seconds * seconds);
+    for (const name of ACCELERATION) columns[name] = scaled(table.column(name), acceleration);
+  }
+  return columns;
+}
+
+/** A path from SI columns of `table`, its sample errors named by file line and column. */
+export function buildTrajectory(table: CsvTable, columns: PathColumns): SampledPath {
   try {
     return new SampledPath(columns);
   } catch (error) {
@@ -55,20 +90,57 @@ export function trajectoryFromTable(table: CsvTable): SampledPath {
   }
 }
 
+function completeGroup(table: CsvTable, group: readonly string[]): boolean {
+  const missing = group.filter((name) => !table.has(name));
+  if (missing.length === group.length) return false;
+  if (missing.length > 0) {
+    throw InputError.at(
+      table.file,
+      table.headerLine,
+      missing,
+      `missing; ${group.join(', ')} must be given together or not at all`,
+    );
+  }
+  return true;
+}
+
+function scaled(values: Float64Array, factor: number): Float64Array {
+  if (factor !== 1) for (let i = 0; i < values.length; i++) values[i] *= factor;
+  return values;
+}
+
+/** v = c·βγ/√(1 + |βγ|²): below c for every finite βγ, and exact enough at γ = 10⁴. */
+function velocitiesFromMomentum(table: CsvTable): Pick<PathColumns, 'vx' | 'vy' | 'vz'> {
+  const ux = table.column('bgx');
+  const uy = table.column('bgy');
+  const uz = table.column('bgz');
+  const n = table.rowCount;
+  const vx = new Float64Array(n);
+  const vy = new Float64Array(n);
+  const vz = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const scale = SPEED_OF_LIGHT / Math.sqrt(1 + ux[i] * ux[i] + uy[i] * uy[i] + uz[i] * uz[i]);
+    vx[i] = ux[i] * scale;
+    vy[i] = uy[i] * scale;
+    vz[i] = uz[i] * scale;
+  }
+  return { vx, vy, vz };
+}
+
 function locatePathError(error: PathError, table: CsvTable): InputError {
   const inRange = error.sample >= 0 && error.sample < table.rowCount;
   const line = inRange ? table.lines[error.sample] : table.headerLine;
-  const given = table.has('vx');
   if (error.column === 'v') {
     // Speeds are checked on velocities: given ones, or the spline's through the positions.
-    const columns = given ? [...VELOCITY] : ['x', 'y', 'z'];
+    const given = table.has('vx') ? [...VELOCITY] : table.has('bgx') ? [...MOMENTUM] : null;
     const hint = given ? '' : ' (velocities here come from a spline through x, y, z)';
-    return InputError.at(table.file, line, columns, error.message + hint);
+    return InputError.at(table.file, line, given ?? ['x', 'y', 'z'], error.message + hint);
   }
-  return InputError.at(
-    table.file,
-    line,
-    table.has(error.column) ? error.column : '',
-    error.message,
-  );
+  const column = error.column;
+  const named = table.has(column)
+    ? column
+    : column.startsWith('v') && table.has('bgx')
+      ? `bg${column[1]}`
+      : '';
+  return InputError.at(table.file, line, named, error.message);
 }

@@ -5,7 +5,14 @@ import { type PathColumns, SampledPath } from '../../src/path/sampledPath';
 import { ELEMENTARY_CHARGE, VACUUM_PERMEABILITY } from '../../src/physics/constants';
 import { type FieldSample, fieldSample } from '../../src/physics/fieldSample';
 import { evaluateFields } from '../../src/physics/fields';
-import { type CliRun, outputRows, runCli, scratchFolder, trajectoryText } from './cliSupport';
+import {
+  type CliRun,
+  outputRows,
+  runCli,
+  runInProcess,
+  scratchFolder,
+  trajectoryText,
+} from './cliSupport';
 
 const HEADER = 'x,y,z,t,t_ret,Ex,Ey,Ez,Bx,By,Bz,Ex_rad,Ey_rad,Ez_rad,Sx,Sy,Sz,on_charge';
 const e = ELEMENTARY_CHARGE;
@@ -254,6 +261,78 @@ describe('conecast fields', () => {
     expect(message).toBe(`conecast: ${bad} line 3, column "y": not a number: "abc"`);
   });
 
+  it('reads a trajectory written in mm and ns as the same charge in SI', async () => {
+    // The same orbit with t in ns, x, y, z in mm and velocities in mm/ns (1 mm/ns = 1e6 m/s).
+    const inMmNs = {
+      t: Array.from(ORBIT.t, (t) => t * 1e9),
+      x: Array.from(ORBIT.x, (x) => x * 1e3),
+      y: Array.from(ORBIT.y, (y) => y * 1e3),
+      z: Array.from(ORBIT.z, (z) => z * 1e3),
+      vx: Array.from(ORBIT.vx!, (v) => v * 1e-6),
+      vy: Array.from(ORBIT.vy!, (v) => v * 1e-6),
+      vz: Array.from(ORBIT.vz!, (v) => v * 1e-6),
+      // 1 mm/ns² = 1e15 m/s².
+      ax: Array.from(ORBIT.ax!, (a) => a * 1e-15),
+      ay: Array.from(ORBIT.ay!, (a) => a * 1e-15),
+      az: Array.from(ORBIT.az!, (a) => a * 1e-15),
+    };
+    const scaledFile = scratch.file('orbit-mm-ns.csv', trajectoryText(inMmNs));
+    const si = await runInProcess([
+      'fields',
+      '--trajectory',
+      orbitFile,
+      '--charge',
+      '-e',
+      '--points',
+      timedFile,
+    ]);
+    const scaled = await runInProcess([
+      'fields',
+      '--trajectory',
+      scaledFile,
+      '--charge',
+      '-e',
+      '--points',
+      timedFile,
+      '--length-unit',
+      'mm',
+      '--time-unit',
+      'ns',
+    ]);
+    expect(scaled.stderr).toBe('');
+    const a = outputRows(si.stdout).rows;
+    const b = outputRows(scaled.stdout).rows;
+    expect(b).toHaveLength(a.length);
+    // Writing and reading back through unit factors rounds each sample by a few ulps; the
+    // fields follow to well within 1e-9 relative of the largest component.
+    for (let r = 0; r < a.length; r++) {
+      const scale = Math.max(...a[r].slice(5, 11).map(Math.abs));
+      for (let c = 5; c < 11; c++) {
+        expect(Math.abs(b[r][c] - a[r][c])).toBeLessThanOrEqual(1e-9 * scale);
+      }
+    }
+  });
+
+  it.each([
+    [['--length-unit', 'inch'], '--length-unit "inch" is not one of nm, µm, um, mm, cm, m, km'],
+    [['--time-unit', 'min'], '--time-unit "min" is not one of as, fs, ps, ns, µs, us, ms, s'],
+  ])('refuses an unknown unit %j in one line', async (extra, expected) => {
+    const run = await runInProcess([
+      'fields',
+      '--trajectory',
+      orbitFile,
+      '--charge',
+      '-e',
+      '--points',
+      gridFile,
+      '--time',
+      '0',
+      ...extra,
+    ]);
+    expect(run.status).toBe(2);
+    expect(run.stderr).toBe(`conecast: ${expected}\n`);
+  });
+
   it('names a missing trajectory file', () => {
     const missing = `${scratch.dir}/beam-missing.csv`;
     const message = oneLineFailure(
@@ -299,7 +378,10 @@ describe('conecast help', () => {
       HEADER,
       't_ret',
       'vx,vy,vz',
+      'bgx,bgy,bgz',
       'ax,ay,az',
+      '--length-unit',
+      '--time-unit',
       'm/s^2',
       'V/m',
       'W/m^2',

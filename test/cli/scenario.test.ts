@@ -108,6 +108,21 @@ describe('conecast fields --scenario', () => {
     }
   });
 
+  it('refuses trajectory units with --scenario, which is always in SI', async () => {
+    const run = await runInProcess([
+      'fields',
+      '--scenario',
+      scenarioFile,
+      '--length-unit',
+      'mm',
+      '--points',
+      points,
+    ]);
+    expect(oneLineFailure(run)).toBe(
+      'conecast: --length-unit and --time-unit apply to trajectory files; a scenario is always in SI units',
+    );
+  });
+
   it('names the file and the field of a broken scenario in one line', async () => {
     const doc = scenarioDocument();
     const charges = doc.charges as { path: { params: { beta: number } } }[];

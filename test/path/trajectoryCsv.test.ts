@@ -5,6 +5,7 @@ import { type PathState, pathState } from '../../src/path/pathState';
 import { circularOrbit } from '../../src/path/presets';
 import { SampledPath } from '../../src/path/sampledPath';
 import { parseTrajectory, readTrajectory } from '../../src/path/trajectoryCsv';
+import { SPEED_OF_LIGHT } from '../../src/physics/constants';
 
 /** The InputError that parsing `text` as beam.csv throws (fails when nothing is thrown). */
 function trajectoryError(text: string): InputError {
@@ -105,7 +106,57 @@ describe('parseTrajectory', () => {
       'beam.csv line 1: missing column "z"; header has t, x, y',
     );
     expect(trajectoryError('t,x,y,z,w\n').message).toBe(
-      'beam.csv line 1, column "w": unknown column; allowed: t, x, y, z, vx, vy, vz, ax, ay, az',
+      'beam.csv line 1, column "w": unknown column; allowed: t, x, y, z, vx, vy, vz, bgx, bgy, bgz, ax, ay, az',
+    );
+  });
+});
+
+describe('trajectory units and βγ columns', () => {
+  it('reads lengths in mm and times in ns as the same path in SI', () => {
+    const si = parseTrajectory(
+      't,x,y,z,vx,vy,vz\n0,0,0,0,1e8,0,0\n1e-9,0.1,0,0,1e8,0,0\n',
+      'si.csv',
+    );
+    // 1e8 m/s = 100 mm/ns; 0.1 m = 100 mm; 1e-9 s = 1 ns.
+    const scaled = parseTrajectory(
+      't,x,y,z,vx,vy,vz\n0,0,0,0,100,0,0\n1,100,0,0,100,0,0\n',
+      'mm-ns.csv',
+      { length: 'mm', time: 'ns' },
+    );
+    const a = pathState();
+    const b = pathState();
+    si.stateAt(0.4e-9, a);
+    scaled.stateAt(0.4e-9, b);
+    // Unit factors 1e-3 and 1e-9 are not exact in binary: a few ulps apart.
+    for (const key of ['px', 'vx', 'ax'] as const) {
+      expect(b[key]).toBeCloseTo(a[key], 12 - Math.round(Math.log10(Math.abs(a[key]) || 1)));
+    }
+  });
+
+  it('turns βγ into velocity v = cβγ/√(1 + |βγ|²), exact to the last digits at γ = 10⁴', () => {
+    // Uniform motion along x with βγ = √(γ² − 1) at γ = 10⁴ (Jackson 3rd ed. §11.3: p = γmv).
+    const gamma = 1e4;
+    const u = Math.sqrt(gamma * gamma - 1);
+    const c = SPEED_OF_LIGHT;
+    const beta = u / Math.sqrt(1 + u * u);
+    const text = `t,x,y,z,bgx,bgy,bgz\n0,0,0,0,${u},0,0\n1e-9,${beta * c * 1e-9},0,0,${u},0,0\n`;
+    const path = parseTrajectory(text, 'fast.csv');
+    const s = pathState();
+    path.stateAt(0.5e-9, s);
+    // 1 − β = 1/(2γ²) + 1/(8γ⁴) + … = 5.0000000125e-9 (series of 1 − √(1 − 1/γ²)). A double
+    // near c is spaced 6e-8 m/s, 4e-8 of c·(1 − β): the tolerance allows that rounding.
+    expect(Math.abs((c - s.vx) / c / 5.0000000125e-9 - 1)).toBeLessThan(1e-7);
+  });
+
+  it('refuses velocities given twice, naming both groups', () => {
+    expect(trajectoryError('t,x,y,z,vx,vy,vz,bgx,bgy,bgz\n0,0,0,0,0,0,0,0,0,0\n').message).toBe(
+      'beam.csv line 1, columns "vx", "vy", "vz", "bgx", "bgy", "bgz": give the velocity once: as vx, vy, vz or as βγ in bgx, bgy, bgz, not both',
+    );
+  });
+
+  it('names half a βγ group', () => {
+    expect(trajectoryError('t,x,y,z,bgx,bgy\n0,0,0,0,0,0\n').message).toBe(
+      'beam.csv line 1, column "bgz": missing; bgx, bgy, bgz must be given together or not at all',
     );
   });
 });

@@ -8,15 +8,13 @@ import { vec3 } from '../../physics/vec3';
 import { type OptionSpecs, type ParsedArgs, parseArgs } from '../args';
 import { type CliIo, type Command, EXIT_OK } from '../command';
 import { LineWriter } from '../output';
-import { readScenarioOrCharges } from '../readCharges';
+import { CHARGE_OPTIONS, readScenarioOrCharges } from '../readCharges';
 import { UsageError } from '../usageError';
 import { parseNumberOption } from '../values';
 import { FIELDS_HELP, FIELDS_SUMMARY } from './fieldsHelp';
 
 const OPTIONS: OptionSpecs = {
-  trajectory: { value: true, repeat: true },
-  charge: { value: true, repeat: true },
-  scenario: { value: true },
+  ...CHARGE_OPTIONS,
   points: { value: true },
   time: { value: true },
   help: { value: false, short: 'h' },

@@ -1,4 +1,5 @@
 import { FIELDS_HEADER } from '../../io/fieldsCsv';
+import { UNIT_OPTIONS_HELP } from '../readCharges';
 
 export const FIELDS_SUMMARY =
   'electric and magnetic fields of moving point charges at given points';
@@ -23,17 +24,22 @@ Options:
                      instead of --trajectory and --charge (not together with them);
                      its view is not used here, so the times still come from --time
                      or the points CSV
+${UNIT_OPTIONS_HELP}
   --points FILE      observation points (points CSV below)
   --time T           observation time in seconds (s) for every point: required when
                      the points CSV has no t column, refused when it has one
   -h, --help         show this help
   Options take their value as --name VALUE or --name=VALUE.
 
-Trajectory CSV, one row per sample, times strictly increasing:
-  t          time, s                          required
-  x,y,z      position, m                      required
-  vx,vy,vz   velocity, m/s                    optional, all three or none
-  ax,ay,az   acceleration, m/s^2              optional, all three or none
+Trajectory CSV, one row per sample, times strictly increasing (units: SI, or as
+set by --length-unit L and --time-unit T):
+  t          time, s (T)                      required
+  x,y,z      position, m (L)                  required
+  vx,vy,vz   velocity, m/s (L/T)              optional, all three or none
+  bgx,bgy,bgz
+             velocity as beta*gamma = gamma*v/c, optional, all three or none;
+             not together with vx,vy,vz
+  ax,ay,az   acceleration, m/s^2 (L/T^2)      optional, all three or none
   Missing velocities or accelerations are taken from a smooth spline through the
   samples. The charge must stay slower than light everywhere. Before the first
   sample and after the last the charge moves in a straight line at the first or last

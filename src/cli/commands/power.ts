@@ -5,15 +5,13 @@ import { pathState } from '../../path/pathState';
 import { type OptionSpecs, parseArgs } from '../args';
 import { type CliIo, type Command, EXIT_OK } from '../command';
 import { LineWriter } from '../output';
-import { readScenarioOrCharges } from '../readCharges';
+import { CHARGE_OPTIONS, readScenarioOrCharges } from '../readCharges';
 import { UsageError } from '../usageError';
 import { parseNumberOption } from '../values';
 import { PATTERN_HEADER, POWER_HEADER, POWER_HELP, POWER_SUMMARY } from './powerHelp';
 
 const OPTIONS: OptionSpecs = {
-  trajectory: { value: true, repeat: true },
-  charge: { value: true, repeat: true },
-  scenario: { value: true },
+  ...CHARGE_OPTIONS,
   which: { value: true },
   'source-time': { value: true },
   pattern: { value: false },

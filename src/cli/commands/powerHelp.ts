@@ -21,7 +21,8 @@ per unit observer time (divided by 1 − n·β: what a distant detector collects
 A first line starting with # gives the total power.
 
 Options:
-  --trajectory, --charge, --scenario   one charge, as for conecast fields
+  --trajectory, --charge, --scenario, --length-unit, --time-unit
+                    one charge, as for conecast fields
   --which K         with a scenario of several charges: the K-th (from 1)
   --source-time T   emission time, s
   --pattern         write the angular pattern instead of the total

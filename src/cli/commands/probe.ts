@@ -5,16 +5,14 @@ import { PROBE_HEADER, probeRow, SPECTRUM_HEADER, spectrumRow } from '../../io/p
 import { type OptionSpecs, parseArgs } from '../args';
 import { type CliIo, type Command, EXIT_OK } from '../command';
 import { LineWriter } from '../output';
-import { readScenarioOrCharges } from '../readCharges';
+import { CHARGE_OPTIONS, readScenarioOrCharges } from '../readCharges';
 import { parseList } from '../sliceOptions';
 import { UsageError } from '../usageError';
 import { parseNumberOption } from '../values';
 import { PROBE_HELP, PROBE_SUMMARY } from './probeHelp';
 
 const OPTIONS: OptionSpecs = {
-  trajectory: { value: true, repeat: true },
-  charge: { value: true, repeat: true },
-  scenario: { value: true },
+  ...CHARGE_OPTIONS,
   at: { value: true },
   from: { value: true },
   to: { value: true },

@@ -18,7 +18,8 @@ spectral density per unit area at the point, 2·ε0·c·|Ẽ(f)|² in J/(m²·Hz
 for f = 0, 1/(N·Δt), … up to the Nyquist frequency, where Δt = (T1 − T0)/(N − 1).
 
 Options:
-  --trajectory, --charge, --scenario   the charges, as for conecast fields
+  --trajectory, --charge, --scenario, --length-unit, --time-unit
+                    the charges, as for conecast fields
   --at X,Y,Z        the probe's position in m
   --from T0         start of the observer-time window, s
   --to T1           end of the window, s (after T0)

@@ -8,16 +8,14 @@ import type { Charge } from '../../physics/charge';
 import { type OptionSpecs, parseArgs } from '../args';
 import { writeFileAtomic } from '../atomicWrite';
 import { type CliIo, type Command, EXIT_OK } from '../command';
-import { readScenarioOption, readScenarioOrCharges } from '../readCharges';
+import { CHARGE_OPTIONS, readScenarioOption, readScenarioOrCharges } from '../readCharges';
 import { sliceGeometry } from '../sliceOptions';
 import { UsageError } from '../usageError';
 import { parseNumberOption } from '../values';
 import { SLICE_HELP, SLICE_SUMMARY } from './sliceHelp';
 
 const OPTIONS: OptionSpecs = {
-  trajectory: { value: true, repeat: true },
-  charge: { value: true, repeat: true },
-  scenario: { value: true },
+  ...CHARGE_OPTIONS,
   time: { value: true },
   plane: { value: true },
   center: { value: true },

@@ -18,7 +18,8 @@ centres covering W x H metres of a plane, at observation time T, using one worke
 thread per core, and writes them to FILE (the format follows its extension).
 
 Options:
-  --trajectory, --charge   as for "conecast fields" (trajectory CSV, charge in C or e/-e)
+  --trajectory, --charge, --length-unit, --time-unit
+                  as for "conecast fields" (trajectory CSV, charge in C or e/-e)
   --scenario FILE the charges from a Conecast scenario (JSON) instead of --trajectory
                   and --charge (not together with them); its view gives the defaults
                   for --time, --plane, --center, --size and --res, and any of these
