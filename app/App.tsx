@@ -1,7 +1,7 @@
 import { useRef, useState } from 'react';
 import { AnalysisPanel } from './analysis/AnalysisPanel';
 import { useAppState } from './hooks/useAppState';
-import { useScenarioDrop } from './hooks/useScenarioDrop';
+import { useFileDrop } from './hooks/useFileDrop';
 import { useShortcuts } from './hooks/useShortcuts';
 import { openScenarioFile } from './io/openScenarioFile';
 import { downloadScenario } from './io/scenarioDocument';
@@ -10,6 +10,7 @@ import { ChargesPanel } from './panels/ChargesPanel';
 import { ColourBar } from './panels/ColourBar';
 import { MapLegend } from './panels/MapLegend';
 import { MapPanel } from './panels/MapPanel';
+import { PathImportDialog } from './panels/PathImportDialog';
 import { PictureExport } from './panels/PictureExport';
 import { ProbesPanel } from './panels/ProbesPanel';
 import { Readouts } from './panels/Readouts';
@@ -22,7 +23,7 @@ import { FieldView } from './view/FieldView';
 
 export function App() {
   useShortcuts();
-  useScenarioDrop();
+  useFileDrop();
   const fieldError = useAppState((s) => s.fieldError);
   const fieldFault = useAppState((s) => s.fieldFault);
   const hasScenario = useAppState((s) => s.scenario !== null);
@@ -113,6 +114,7 @@ export function App() {
           </section>
         </aside>
       </main>
+      <PathImportDialog />
     </div>
   );
 }

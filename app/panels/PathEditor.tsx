@@ -1,5 +1,7 @@
 import type { PresetName, ScenarioPath } from '../../src/io/scenario';
+import { formatSI } from '../format/siFormat';
 import { useAppState } from '../hooks/useAppState';
+import { startPathImport } from '../io/pathImport';
 import { withPath } from '../scenario/chargeEdits';
 import { PRESET_FORMS, presetPath } from '../scenario/presetScenes';
 import { observationSpan, suggestedRate } from '../scenario/timeSpan';
@@ -81,9 +83,24 @@ export function PathEditor({ index }: { index: number }) {
       {path.kind === 'expression' && <ExpressionEditor index={index} path={path} />}
       {path.kind === 'samples' && (
         <p className="muted">
-          {path.t.length} samples from {path.t[0]} s to {path.t[path.t.length - 1]} s, as imported.
+          {path.t.length.toLocaleString('en')} samples from {formatSI(path.t[0], 's', 4)} to{' '}
+          {formatSI(path.t[path.t.length - 1], 's', 4)}, as imported.
         </p>
       )}
+      <label className="file-button link-button">
+        Import a path from CSV…
+        <input
+          type="file"
+          accept=".csv,.txt,.dat,text/csv,text/plain"
+          className="visually-hidden"
+          data-testid="import-path"
+          onChange={(event) => {
+            const file = event.currentTarget.files?.[0];
+            if (file) startPathImport(file);
+            event.currentTarget.value = '';
+          }}
+        />
+      </label>
     </div>
   );
 }

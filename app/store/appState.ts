@@ -3,6 +3,7 @@ import type { AnalysisSlice } from './analysisSlice';
 import type { DisplaySlice } from './displaySlice';
 import type { FieldSlice } from './fieldSlice';
 import type { HistorySlice } from './historySlice';
+import type { ImportSlice } from './importSlice';
 import type { ProbesSlice } from './probesSlice';
 import type { ScenarioSlice } from './scenarioSlice';
 import type { TimeSlice } from './timeSlice';
@@ -18,7 +19,8 @@ export type AppState = ScenarioSlice &
   TimeSlice &
   ToolSlice &
   FieldSlice &
-  AnalysisSlice;
+  AnalysisSlice &
+  ImportSlice;
 
 /** A slice creator that sees (and may call into) the whole state. */
 export type SliceCreator<Slice> = StateCreator<AppState, [], [], Slice>;

@@ -4,6 +4,7 @@ import type { AppState } from './appState';
 import { createDisplaySlice } from './displaySlice';
 import { createFieldSlice } from './fieldSlice';
 import { createHistorySlice } from './historySlice';
+import { createImportSlice } from './importSlice';
 import { createProbesSlice } from './probesSlice';
 import { createScenarioSlice } from './scenarioSlice';
 import { createTimeSlice } from './timeSlice';
@@ -22,6 +23,7 @@ export function createAppStore() {
     ...createToolSlice(...args),
     ...createFieldSlice(...args),
     ...createAnalysisSlice(...args),
+    ...createImportSlice(...args),
   }));
 }
 

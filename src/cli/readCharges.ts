@@ -8,7 +8,7 @@ import {
   TIME_UNITS,
   type TrajectoryUnits,
 } from '../io/trajectoryUnits';
-import { readTrajectory } from '../path/trajectoryCsv';
+import { readTrajectory } from '../path/readTrajectory';
 import type { Charge } from '../physics/charge';
 import type { OptionSpecs, ParsedArgs } from './args';
 import { UsageError } from './usageError';

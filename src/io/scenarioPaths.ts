@@ -17,24 +17,53 @@ import { fieldPath, ScenarioError } from './scenarioError';
 import { type presetPathSchema, sketchIssuePath } from './scenarioSchema';
 
 /**
- * Paths already built, by document object: documents are never mutated, so an edit that
- * leaves a path alone (a probe moved, another charge changed) reuses its samples instead of
- * sampling a formula or solving a million-point spline again.
+ * Paths already built. Parsing a document makes new objects, so paths are found by content:
+ * a samples path by its column arrays (the schema passes them through untouched), any other
+ * by its JSON text, which is short. An edit that leaves a path alone (a probe moved, another
+ * charge changed, undo) then reuses its samples instead of sampling a formula or solving a
+ * million-point spline again, and undo history shares them instead of holding copies.
  */
-const built = new WeakMap<ScenarioPath, SampledPath>();
+const bySamples = new WeakMap<number[], { columns: unknown[]; sampled: SampledPath }>();
+const byText = new Map<string, SampledPath>();
+/** Paths remembered by text; the least recently used goes first. */
+const TEXT_CACHE_SIZE = 16;
+
+const COLUMN_NAMES = ['t', 'x', 'y', 'z', 'vx', 'vy', 'vz', 'ax', 'ay', 'az'] as const;
 
 /** The sampled path of one scenario path; `where` names it in errors (`charges[0].path`). */
 export function buildPath(path: ScenarioPath, where: string): SampledPath {
-  const known = built.get(path);
+  const known = findBuilt(path);
   if (known !== undefined) return known;
   const result = samplePath(path, where);
-  built.set(path, result);
+  rememberBuiltPath(path, result);
   return result;
 }
 
-/** Lets a path built elsewhere (an import worker) stand for its document object. */
+/** Lets a path built elsewhere (an import worker) stand for its document content. */
 export function rememberBuiltPath(path: ScenarioPath, sampled: SampledPath): void {
-  built.set(path, sampled);
+  if (path.kind === 'samples') {
+    bySamples.set(path.t, { columns: COLUMN_NAMES.map((name) => path[name]), sampled });
+    return;
+  }
+  const key = JSON.stringify(path);
+  byText.delete(key);
+  byText.set(key, sampled);
+  if (byText.size > TEXT_CACHE_SIZE) byText.delete(byText.keys().next().value as string);
+}
+
+function findBuilt(path: ScenarioPath): SampledPath | undefined {
+  if (path.kind === 'samples') {
+    const entry = bySamples.get(path.t);
+    const same = entry?.columns.every((column, k) => column === path[COLUMN_NAMES[k]]);
+    return same ? entry?.sampled : undefined;
+  }
+  const key = JSON.stringify(path);
+  const sampled = byText.get(key);
+  if (sampled !== undefined) {
+    byText.delete(key);
+    byText.set(key, sampled);
+  }
+  return sampled;
 }
 
 function samplePath(path: ScenarioPath, where: string): SampledPath {

@@ -1,7 +1,6 @@
 import type { CsvSchema, CsvTable } from '../io/csvTable';
 import { parseCsvTable } from '../io/csvTable';
 import { InputError } from '../io/inputError';
-import { readTextFile } from '../io/readTextFile';
 import { LENGTH_UNITS, SI_UNITS, TIME_UNITS, type TrajectoryUnits } from '../io/trajectoryUnits';
 import { SPEED_OF_LIGHT } from '../physics/constants';
 import { type PathColumns, PathError, SampledPath } from './sampledPath';
@@ -19,11 +18,6 @@ export const TRAJECTORY_SCHEMA: CsvSchema = {
   required: ['t', 'x', 'y', 'z'],
   optional: [...VELOCITY, ...MOMENTUM, ...ACCELERATION],
 };
-
-/** Reads a trajectory CSV file into a path; every error names the file, line and column. */
-export function readTrajectory(path: string, units: TrajectoryUnits = SI_UNITS): SampledPath {
-  return parseTrajectory(readTextFile(path), path, units);
-}
 
 /** Parses trajectory CSV text; `file` only names the source in error messages. */
 export function parseTrajectory(

@@ -3,8 +3,9 @@ import { InputError } from '../../src/io/inputError';
 import { sampleMotion } from '../../src/path/analyticMotion';
 import { type PathState, pathState } from '../../src/path/pathState';
 import { circularOrbit } from '../../src/path/presets';
+import { readTrajectory } from '../../src/path/readTrajectory';
 import { SampledPath } from '../../src/path/sampledPath';
-import { parseTrajectory, readTrajectory } from '../../src/path/trajectoryCsv';
+import { parseTrajectory } from '../../src/path/trajectoryCsv';
 import { SPEED_OF_LIGHT } from '../../src/physics/constants';
 
 /** The InputError that parsing `text` as beam.csv throws (fails when nothing is thrown). */

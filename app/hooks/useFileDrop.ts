@@ -1,8 +1,9 @@
 import { useEffect } from 'react';
 import { openScenarioFile } from '../io/openScenarioFile';
+import { startPathImport } from '../io/pathImport';
 
-/** A scenario file dropped anywhere on the page is opened. */
-export function useScenarioDrop(): void {
+/** A file dropped anywhere on the page: a .json opens as a scenario, anything else as a path. */
+export function useFileDrop(): void {
   useEffect(() => {
     const onDragOver = (event: DragEvent) => {
       if (event.dataTransfer?.types.includes('Files')) event.preventDefault();
@@ -11,7 +12,8 @@ export function useScenarioDrop(): void {
       const file = event.dataTransfer?.files[0];
       if (file === undefined) return;
       event.preventDefault();
-      void openScenarioFile(file);
+      if (/\.json$/i.test(file.name)) void openScenarioFile(file);
+      else startPathImport(file);
     };
     window.addEventListener('dragover', onDragOver);
     window.addEventListener('drop', onDrop);
