@@ -5,6 +5,7 @@ import { useFileDrop } from './hooks/useFileDrop';
 import { useShortcuts } from './hooks/useShortcuts';
 import { openScenarioFile } from './io/openScenarioFile';
 import { downloadScenario } from './io/scenarioDocument';
+import { AutosaveStatus } from './panels/AutosaveStatus';
 import { CAUTIONS_ID, Cautions } from './panels/Cautions';
 import { ChargesPanel } from './panels/ChargesPanel';
 import { ColourBar } from './panels/ColourBar';
@@ -15,9 +16,11 @@ import { PictureExport } from './panels/PictureExport';
 import { ProbesPanel } from './panels/ProbesPanel';
 import { Readouts } from './panels/Readouts';
 import { ScenarioSummary } from './panels/ScenarioSummary';
+import { ShareLink } from './panels/ShareLink';
 import { SliceExport } from './panels/SliceExport';
 import { TimeBar } from './panels/TimeBar';
 import { Toolbar } from './panels/Toolbar';
+import { WorkNotice } from './panels/WorkNotice';
 import { appStore } from './store/appStore';
 import { FieldView } from './view/FieldView';
 
@@ -35,7 +38,8 @@ export function App() {
       <header className="app-header">
         <h1 className="app-name">Conecast</h1>
         <span className="app-tagline">retarded-time fields of moving point charges</span>
-        <label className="header-button header-plain file-button">
+        <AutosaveStatus />
+        <label className="header-button header-plain header-first file-button">
           Open scenario…
           <input
             type="file"
@@ -57,6 +61,7 @@ export function App() {
         >
           Save scenario
         </button>
+        <ShareLink />
         <button
           ref={cautionsToggle}
           type="button"
@@ -75,6 +80,7 @@ export function App() {
           cautionsToggle.current?.focus();
         }}
       />
+      <WorkNotice />
       <main className="workspace">
         <aside className="side-panel side-left" aria-label="Charges and paths">
           <ChargesPanel />

@@ -3,7 +3,7 @@ import { createRoot } from 'react-dom/client';
 import { App } from './App';
 import { startFieldEngine } from './engine/fieldEngine';
 import { startPlayback } from './engine/playback';
-import { DEMO_SCENARIO_URL, openScenario } from './io/openScenario';
+import { openStartingScenario, startKeepingWork } from './io/work';
 import { appStore } from './store/appStore';
 import './styles.css';
 
@@ -13,7 +13,8 @@ if (root === null) throw new Error('index.html has no #root element');
 // Started outside React so StrictMode's double effects cannot fetch twice or make two pools.
 startFieldEngine(appStore);
 startPlayback(appStore);
-void openScenario(DEMO_SCENARIO_URL);
+startKeepingWork();
+void openStartingScenario();
 
 createRoot(root).render(
   <StrictMode>

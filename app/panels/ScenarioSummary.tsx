@@ -1,4 +1,7 @@
+import { useState } from 'react';
 import { useAppState } from '../hooks/useAppState';
+import { SHARED_LINK } from '../io/work';
+import { ScenarioInfoEditor } from './ScenarioInfoEditor';
 
 /** Title of the loaded scenario, whether it is invented, and its note; and why a load failed. */
 export function ScenarioSummary() {
@@ -7,6 +10,7 @@ export function ScenarioSummary() {
   const error = useAppState((s) => s.scenarioError);
   const source = useAppState((s) => s.scenarioSource);
   const edited = useAppState((s) => s.scenario !== s.openedScenario);
+  const [editing, setEditing] = useState(false);
   return (
     <div className="scenario-summary">
       {status === 'failed' && (
@@ -17,6 +21,8 @@ export function ScenarioSummary() {
       )}
       {scenario === null ? (
         status === 'loading' && <p className="muted">Loading scenario…</p>
+      ) : editing ? (
+        <ScenarioInfoEditor scenario={scenario} onDone={() => setEditing(false)} />
       ) : (
         <>
           <div className="scenario-title-row">
@@ -29,6 +35,10 @@ export function ScenarioSummary() {
             ) : (
               <span className="badge">Taken from a real setup</span>
             )}
+            {source === SHARED_LINK && <span className="badge">from a shared link</span>}
+            <button type="button" className="link-button" onClick={() => setEditing(true)}>
+              Describe…
+            </button>
           </div>
           {scenario.note && <p className="scenario-note">{scenario.note}</p>}
         </>

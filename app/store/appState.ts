@@ -9,6 +9,7 @@ import type { ScenarioSlice } from './scenarioSlice';
 import type { TimeSlice } from './timeSlice';
 import type { ToolSlice } from './toolSlice';
 import type { ViewSlice } from './viewSlice';
+import type { WorkSlice } from './workSlice';
 
 /** The whole app state: the union of its slices, declared once here. */
 export type AppState = ScenarioSlice &
@@ -20,7 +21,8 @@ export type AppState = ScenarioSlice &
   ToolSlice &
   FieldSlice &
   AnalysisSlice &
-  ImportSlice;
+  ImportSlice &
+  WorkSlice;
 
 /** A slice creator that sees (and may call into) the whole state. */
 export type SliceCreator<Slice> = StateCreator<AppState, [], [], Slice>;

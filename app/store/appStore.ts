@@ -10,6 +10,7 @@ import { createScenarioSlice } from './scenarioSlice';
 import { createTimeSlice } from './timeSlice';
 import { createToolSlice } from './toolSlice';
 import { createViewSlice } from './viewSlice';
+import { createWorkSlice } from './workSlice';
 
 /** The state as a fresh page sees it; the app has one store, tests may make more. */
 export function createAppStore() {
@@ -24,6 +25,7 @@ export function createAppStore() {
     ...createFieldSlice(...args),
     ...createAnalysisSlice(...args),
     ...createImportSlice(...args),
+    ...createWorkSlice(...args),
   }));
 }
 

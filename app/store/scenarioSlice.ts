@@ -47,6 +47,8 @@ export interface ScenarioSlice {
    */
   editCharges(next: readonly ScenarioCharge[], label: string, record?: boolean): string | null;
   selectCharge(index: number): void;
+  /** Changes the title, note or invented flag as one undoable edit; returns the reason it could not. */
+  editScenarioInfo(change: Partial<Pick<Scenario, 'title' | 'note' | 'invented'>>): string | null;
 }
 
 export const createScenarioSlice: SliceCreator<ScenarioSlice> = (set, get) => ({
@@ -81,6 +83,9 @@ export const createScenarioSlice: SliceCreator<ScenarioSlice> = (set, get) => ({
       scenarioSource: source,
       scenarioStatus: 'ready',
       scenarioError: null,
+      // Another document is other work: its changes are autosaved under a record of their own.
+      workId: null,
+      autosavedAt: null,
     });
     get().clearHistory();
     get().replaceProbes(scenario.probes);
@@ -110,6 +115,21 @@ export const createScenarioSlice: SliceCreator<ScenarioSlice> = (set, get) => ({
       charges,
       selectedCharge: Math.min(state.selectedCharge, charges.length - 1),
     }));
+    return null;
+  },
+  editScenarioInfo: (change) => {
+    const current = get().scenario;
+    if (current === null) return 'no scenario is open';
+    let scenario: Scenario;
+    try {
+      scenario = parseScenario({ ...current, ...change });
+    } catch (error) {
+      if (error instanceof ScenarioError) return error.message;
+      throw error;
+    }
+    get().record('describe the scenario');
+    // The paths are the same, so the built charges stay as they are.
+    set({ scenario });
     return null;
   },
   selectCharge: (index) => {

@@ -57,6 +57,22 @@ describe('the app store', () => {
     expect(formatScenario(scenarioDocument(state)!)).toBe(saved);
   });
 
+  it('renames and re-describes a scenario as one undoable edit, refusing an empty title', () => {
+    const store = createAppStore();
+    store.getState().applyScenarioText(demo, 'demo.json');
+    const charges = store.getState().charges;
+    expect(
+      store.getState().editScenarioInfo({ title: 'Invented: kicker study', invented: false }),
+    ).toBeNull();
+    expect(store.getState().scenario?.title).toBe('Invented: kicker study');
+    expect(store.getState().scenario?.invented).toBe(false);
+    // Only the description changed: the built paths stay, so the map is not computed again.
+    expect(store.getState().charges).toBe(charges);
+    expect(store.getState().editScenarioInfo({ title: '' })).toBe('title: must not be empty');
+    store.getState().undo();
+    expect(store.getState().scenario?.title).toBe('Electron on a 1 cm circular orbit at β = 0.7');
+  });
+
   it('ignores a time that is not a number', () => {
     appStore.getState().setTime(2e-9);
     appStore.getState().setTime(Number.NaN);

@@ -1,0 +1,130 @@
+import { parseScenario } from '../../src/io/scenario';
+import { decodeScenarioLink, linkPayloadOf } from '../../src/io/scenarioLink';
+import { appStore } from '../store/appStore';
+import { type AutosaveControl, startAutosave } from './autosave';
+import { DEMO_SCENARIO_URL, openScenario } from './openScenario';
+import { unpackScenario } from './storedScenario';
+import { type WorkRecord, WorkStore } from './workStore';
+
+/** The browser's store of work in progress (IndexedDB). */
+export const workStore = new WorkStore();
+
+let autosave: AutosaveControl | null = null;
+
+/** Starts autosaving the app's work (once, from main). */
+export function startKeepingWork(): void {
+  autosave ??= startAutosave(appStore, workStore);
+}
+
+/** Where a shared link's scenario is said to come from. */
+export const SHARED_LINK = 'shared link';
+
+/**
+ * Opens what the page should start with: the scenario of a shared link in the address, else
+ * the newest autosaved work (said so, with an offer to discard it), else the demo. Other
+ * autosaved work is offered beside it; nothing kept is dropped without the user asking.
+ */
+export async function openStartingScenario(): Promise<void> {
+  const state = appStore.getState();
+  let saved: WorkRecord[] = [];
+  try {
+    saved = await workStore.list();
+  } catch (error) {
+    state.setWorkState({
+      autosaveProblem: `autosaved work could not be read (${reasonOf(error)})`,
+    });
+  }
+  const payload = linkPayloadOf(window.location.hash);
+  if (payload !== null) {
+    // The link has done its job; a reload should find the autosave of any changes, not the link.
+    window.history.replaceState(null, '', window.location.pathname + window.location.search);
+    try {
+      appStore.getState().openScenarioDocument(await decodeScenarioLink(payload), SHARED_LINK);
+      appStore.getState().setWorkState({ otherWork: saved });
+      return;
+    } catch (error) {
+      appStore.getState().setWorkState({ linkProblem: reasonOf(error) });
+    }
+  }
+  const unreadable: string[] = [];
+  for (const record of saved) {
+    const problem = await openWork(record);
+    if (problem === null) {
+      appStore.getState().setWorkState({
+        restoredWork: record,
+        otherWork: saved.filter((other) => other.id !== record.id),
+      });
+      return;
+    }
+    unreadable.push(`“${record.title}”: ${problem}`);
+  }
+  if (unreadable.length > 0) {
+    appStore.getState().setWorkState({
+      autosaveProblem: `autosaved work could not be opened and is kept as it is (${unreadable.join('; ')})`,
+    });
+  }
+  await openScenario(DEMO_SCENARIO_URL);
+  appStore.getState().setWorkState({ otherWork: saved });
+}
+
+/** Opens a piece of autosaved work, which goes on being saved under its record. */
+export async function openWork(record: WorkRecord): Promise<string | null> {
+  try {
+    const stored = await workStore.load(record.id);
+    if (stored === undefined) return 'it is no longer kept';
+    const scenario = parseScenario(unpackScenario(stored));
+    const state = appStore.getState();
+    state.openScenarioDocument(
+      scenario,
+      `autosaved work from ${new Date(record.savedAt).toLocaleString()}`,
+    );
+    state.setWorkState({ workId: record.id, autosavedAt: record.savedAt });
+    return null;
+  } catch (error) {
+    return reasonOf(error);
+  }
+}
+
+/** Switches to another piece of autosaved work; the open one stays kept. */
+export async function switchToWork(record: WorkRecord): Promise<void> {
+  const problem = await openWork(record);
+  if (problem !== null) {
+    appStore
+      .getState()
+      .setWorkState({ autosaveProblem: `“${record.title}” could not be opened: ${problem}` });
+    return;
+  }
+  // The work that was open has been saved on the way out; list it among the others.
+  await autosave?.settled();
+  const others = await workStore.list().catch(() => [] as WorkRecord[]);
+  appStore.getState().setWorkState({
+    restoredWork: null,
+    otherWork: others.filter((other) => other.id !== record.id),
+  });
+}
+
+/** Deletes a piece of autosaved work the user chose to discard; if it is open, opens the demo. */
+export async function discardWork(record: WorkRecord): Promise<void> {
+  const open = appStore.getState().workId === record.id;
+  if (open) autosave?.dropWaiting();
+  await autosave?.settled();
+  try {
+    await workStore.remove(record.id);
+  } catch (error) {
+    appStore.getState().setWorkState({ autosaveProblem: `could not discard (${reasonOf(error)})` });
+    return;
+  }
+  const state = appStore.getState();
+  state.setWorkState({
+    otherWork: state.otherWork.filter((other) => other.id !== record.id),
+    restoredWork: state.restoredWork?.id === record.id ? null : state.restoredWork,
+  });
+  if (open) {
+    state.setWorkState({ workId: null });
+    await openScenario(DEMO_SCENARIO_URL);
+  }
+}
+
+function reasonOf(error: unknown): string {
+  return error instanceof Error ? error.message : String(error);
+}
