@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { compileMotion, ExpressionError } from '../path/expressionPath';
+import { MAX_PATH_SAMPLES } from '../path/pathLimits';
 import { checkSketch, MAX_SKETCH_CONTROLS, SketchError } from '../path/sketchPath';
 import { SPEED_OF_LIGHT } from '../physics/constants';
 import {
@@ -18,8 +19,8 @@ export const SCENARIO_FORMAT = 'conecast-scenario';
 /** The document version this build writes; older ones are migrated on reading. */
 export const SCENARIO_VERSION = 2;
 
-/** Most samples one path may have, whether sampled from a formula or imported. */
-export const MAX_PATH_SAMPLES = 1_000_000;
+export { MAX_PATH_SAMPLES };
+
 const MAX_GRID_SIDE = 8192;
 /** Most probes a scenario may hold. */
 export const MAX_PROBES = 1000;

@@ -1,10 +1,10 @@
 import type { PathTransfer } from '../engine/workerProtocol';
+import { MAX_PATH_SAMPLES } from '../path/pathLimits';
 import { pathToTransfer } from '../path/pathTransfer';
 import { buildTrajectory, TRAJECTORY_SCHEMA, trajectoryColumns } from '../path/trajectoryCsv';
 import { SPEED_OF_LIGHT } from '../physics/constants';
 import { parseCsvTable } from './csvTable';
 import { InputError } from './inputError';
-import { MAX_PATH_SAMPLES } from './scenarioSchema';
 import type { TrajectoryUnits } from './trajectoryUnits';
 
 /** Rows of the file shown as they are written, so a user can check the columns and units. */
