@@ -38,12 +38,23 @@ export default defineConfig({
       },
     },
   ],
-  webServer: {
-    command: 'npm start',
-    url: 'http://localhost:5173',
-    reuseExistingServer: !isCI,
-    timeout: 60_000,
-    stdout: 'ignore',
-    stderr: 'pipe',
-  },
+  webServer: [
+    {
+      command: 'npm start',
+      url: 'http://localhost:5173',
+      reuseExistingServer: !isCI,
+      timeout: 60_000,
+      stdout: 'ignore',
+      stderr: 'pipe',
+    },
+    {
+      // The built app, with its Content-Security-Policy, for e2e/builtApp.spec.ts.
+      command: 'npm run build && npm run preview',
+      url: 'http://localhost:4173',
+      reuseExistingServer: !isCI,
+      timeout: 120_000,
+      stdout: 'ignore',
+      stderr: 'pipe',
+    },
+  ],
 });

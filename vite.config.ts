@@ -1,5 +1,5 @@
 import react from '@vitejs/plugin-react';
-import { defineConfig } from 'vitest/config';
+import { defineConfig, type Plugin } from 'vitest/config';
 
 // Cross-origin isolation lets the page and its workers share memory (SharedArrayBuffer).
 const isolation = {
@@ -7,10 +7,43 @@ const isolation = {
   'Cross-Origin-Embedder-Policy': 'require-corp',
 };
 
+/**
+ * The built app's Content-Security-Policy: its own scripts, workers, styles and data only; no
+ * eval or new Function ('unsafe-eval' is absent), no inline script, no plugins, no framing of
+ * forms. Images may be data: or blob: URLs (the picture export draws through them).
+ */
+export const CONTENT_SECURITY_POLICY = [
+  "default-src 'self'",
+  "script-src 'self'",
+  "worker-src 'self'",
+  "style-src 'self'",
+  "img-src 'self' data: blob:",
+  "connect-src 'self'",
+  "font-src 'self'",
+  "object-src 'none'",
+  "base-uri 'none'",
+  "form-action 'none'",
+].join('; ');
+
+/** Puts the policy in the built index.html; the dev server needs inline scripts and goes without. */
+function contentSecurityPolicy(): Plugin {
+  return {
+    name: 'conecast-content-security-policy',
+    apply: 'build',
+    transformIndexHtml: () => [
+      {
+        tag: 'meta',
+        attrs: { 'http-equiv': 'Content-Security-Policy', content: CONTENT_SECURITY_POLICY },
+        injectTo: 'head-prepend',
+      },
+    ],
+  };
+}
+
 export default defineConfig({
   root: 'app',
   publicDir: '../public',
-  plugins: [react()],
+  plugins: [react(), contentSecurityPolicy()],
   server: { headers: isolation },
   preview: { headers: isolation },
   build: { outDir: '../dist', emptyOutDir: true, target: 'es2022' },
