@@ -16,14 +16,15 @@ export const SETTLE_MS = 150;
  * flight only once that request's coarse pass is on screen; while changes keep coming (a drag,
  * playback) only coarse maps are computed, and the full map follows once they stop. So the
  * picture keeps up with the pointer instead of every pass being cancelled before it ends.
- * Returns a function that stops it and ends the workers.
+ * `makePool` makes the worker pool, given where to report a worker that failed. Returns a
+ * function that stops it and ends the workers.
  */
 export function startFieldEngine(
   store: AppStore,
-  pool: SlicePool = createBrowserSlicePool((message) =>
-    store.getState().setFieldState({ fieldFault: message }),
-  ),
+  makePool: (onFault: (message: string) => void) => SlicePool = createBrowserSlicePool,
 ): () => void {
+  // A worker that failed was replaced and its part recomputed: the user is told, in one line.
+  const pool = makePool((message) => store.getState().setFieldState({ fieldFault: message }));
   let charges: readonly Charge[] | null = null;
   let spec: SliceSpec | null = null;
   let generation = 0;
