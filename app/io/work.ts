@@ -13,7 +13,30 @@ let autosave: AutosaveControl | null = null;
 
 /** Starts autosaving the app's work (once, from main). */
 export function startKeepingWork(): void {
-  autosave ??= startAutosave(appStore, workStore);
+  if (autosave !== null) return;
+  autosave = startAutosave(appStore, workStore);
+  // Work replaced by other work was saved on the way out: list it so it can be opened again.
+  let opened = appStore.getState().openedScenario;
+  appStore.subscribe((state) => {
+    if (state.openedScenario === opened) return;
+    opened = state.openedScenario;
+    void refreshOtherWork();
+  });
+}
+
+/** Lists the autosaved work other than the open one, once every save under way has landed. */
+export async function refreshOtherWork(): Promise<void> {
+  await autosave?.settled();
+  let records: WorkRecord[];
+  try {
+    records = await workStore.list();
+  } catch {
+    return;
+  }
+  const current = appStore.getState().workId;
+  appStore
+    .getState()
+    .setWorkState({ otherWork: records.filter((record) => record.id !== current) });
 }
 
 /** Where a shared link's scenario is said to come from. */
