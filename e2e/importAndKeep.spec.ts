@@ -126,6 +126,8 @@ test('a million-row path is read while the page goes on answering, and then driv
 });
 
 test('work survives a reload: restored with an offer to discard it', async ({ page }) => {
+  // Three whole page loads on a software renderer.
+  test.setTimeout(60_000);
   const errors = collectErrors(page);
   await openApp(page);
   await page.getByRole('button', { name: 'Add a probe at the slice centre' }).click();
@@ -149,6 +151,28 @@ test('work survives a reload: restored with an offer to discard it', async ({ pa
   await page.reload();
   await mapDrawn(page);
   await expect(page.getByTestId('restored-work')).toHaveCount(0);
+  expect(errors).toEqual([]);
+});
+
+test('work survives a crash of the tab', async ({ page, context }) => {
+  // Two whole page loads on a software renderer.
+  test.setTimeout(60_000);
+  await openApp(page);
+  await page.getByRole('button', { name: 'Add a probe at the slice centre' }).click();
+  await page.getByLabel('Arrows').selectOption('S');
+  await expect(page.getByTestId('autosave-status')).toBeVisible();
+  // The tab's renderer dies without a chance to save anything more.
+  const crashed = page.waitForEvent('crash');
+  const session = await context.newCDPSession(page);
+  void session.send('Page.crash').catch(() => {});
+  await crashed;
+  const next = await context.newPage();
+  const errors = collectErrors(next);
+  await next.goto('/');
+  await mapDrawn(next);
+  await expect(next.getByTestId('restored-work')).toBeVisible();
+  await expect(next.getByRole('button', { name: 'Probe P1', exact: true })).toBeVisible();
+  await expect(next.getByLabel('Arrows')).toHaveValue('S');
   expect(errors).toEqual([]);
 });
 
