@@ -1,6 +1,12 @@
 import { useEffect, useRef } from 'react';
 import type { TrajectorySummary } from '../../src/io/trajectoryImport';
-import { isLengthUnit, isTimeUnit, LENGTH_UNITS, TIME_UNITS } from '../../src/io/trajectoryUnits';
+import {
+  isLengthUnit,
+  isTimeUnit,
+  LENGTH_UNITS,
+  TIME_UNITS,
+  type TrajectoryUnits,
+} from '../../src/io/trajectoryUnits';
 import { formatSI } from '../format/siFormat';
 import { useAppState } from '../hooks/useAppState';
 import { changeImportUnits, takeImportedPath } from '../io/pathImport';
@@ -91,7 +97,7 @@ export function PathImportDialog() {
           </p>
         )}
         {pending.status === 'ready' && pending.result && (
-          <ImportSummary summary={pending.result.summary} />
+          <ImportSummary summary={pending.result.summary} units={units} />
         )}
         <label className="inline-choice">
           <input
@@ -129,7 +135,16 @@ const VELOCITY_SOURCES: Record<TrajectorySummary['velocity'], string> = {
   none: 'from a spline through the positions',
 };
 
-function ImportSummary({ summary }: { summary: TrajectorySummary }) {
+/** The unit a column is read in: the chosen length and time units, or 1 for βγ. */
+function columnUnit(name: string, units: TrajectoryUnits): string {
+  if (name === 't') return units.time;
+  if (name.startsWith('bg')) return '1';
+  if (name.startsWith('v')) return `${units.length}/${units.time}`;
+  if (name.startsWith('a')) return `${units.length}/${units.time}²`;
+  return units.length;
+}
+
+function ImportSummary({ summary, units }: { summary: TrajectorySummary; units: TrajectoryUnits }) {
   const [t0, t1] = summary.timeSpan;
   const extent = (k: number) =>
     `${formatSI(summary.min[k], 'm', 4)} to ${formatSI(summary.max[k], 'm', 4)}`;
@@ -169,7 +184,7 @@ function ImportSummary({ summary }: { summary: TrajectorySummary }) {
           <tr>
             {summary.names.map((name) => (
               <th key={name} scope="col">
-                {name}
+                {name} <span className="unit">({columnUnit(name, units)})</span>
               </th>
             ))}
           </tr>

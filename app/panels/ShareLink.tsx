@@ -44,7 +44,14 @@ export function ShareLink() {
         Copy link
       </button>
       {link.kind !== 'closed' && (
-        <div className="share-popover" role="dialog" aria-label="Link to this scenario">
+        <div
+          className="share-popover"
+          role="dialog"
+          aria-label="Link to this scenario"
+          onKeyDown={(event) => {
+            if (event.key === 'Escape') setLink({ kind: 'closed' });
+          }}
+        >
           {link.kind === 'ready' ? (
             <>
               <p>
