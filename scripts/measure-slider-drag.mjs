@@ -1,57 +1,12 @@
 // Measures how closely the drawn map follows the time slider while it is dragged, on the
 // production build: one slider step per animation frame, a 256 × 256 grid, this machine's GPU
 // (or software WebGL). Prints frame times and the lag in frames; asserts nothing.
-import { spawn, spawnSync } from 'node:child_process';
-import { chromium } from '@playwright/test';
+import { openBuiltApp } from './builtAppPage.mjs';
 
-const PORT = 4173;
 const FRAMES = 240;
 const GRID = process.argv[2] ?? '256';
 
-try {
-  await fetch(`http://localhost:${PORT}/`);
-  console.error(`port ${PORT} is already serving something; stop it first`);
-  process.exit(1);
-} catch {}
-
-const build = spawnSync('npx', ['vite', 'build', '--logLevel', 'error'], { stdio: 'inherit' });
-if (build.status !== 0) process.exit(build.status ?? 1);
-const server = spawn('npx', ['vite', 'preview', '--port', String(PORT), '--strictPort'], {
-  stdio: 'ignore',
-  detached: true,
-});
-const stop = () => {
-  try {
-    process.kill(-server.pid);
-  } catch {}
-};
-process.on('exit', stop);
-
-async function waitForServer() {
-  for (let attempt = 0; attempt < 100; attempt++) {
-    try {
-      if ((await fetch(`http://localhost:${PORT}/`)).ok) return;
-    } catch {}
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-  throw new Error('the preview server did not start');
-}
-
-await waitForServer();
-const browser = await chromium.launch({
-  executablePath: '/usr/bin/chromium',
-  args: [
-    '--disable-background-networking',
-    '--disable-component-update',
-    '--disable-sync',
-    '--no-first-run',
-    '--disable-quic',
-  ],
-});
-const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
-await page.goto(`http://localhost:${PORT}/`);
-const view = page.getByTestId('field-view');
-await view.and(page.locator('[data-ready="true"]')).waitFor({ timeout: 60_000 });
+const { page, close } = await openBuiltApp();
 await page.getByLabel('Grid').selectOption(GRID);
 await page.waitForFunction(
   () =>
@@ -110,8 +65,7 @@ const result = await page.evaluate(async (frames) => {
   }
   return { intervals, lags, settleMs };
 }, FRAMES);
-await browser.close();
-stop();
+await close();
 
 const sorted = (values) => [...values].sort((a, b) => a - b);
 const quantile = (values, q) =>
