@@ -1,6 +1,9 @@
+import { oneLine } from './oneLine';
+
 /**
  * Bad input a user can fix: a file, the line (1-based, 0 for none) and the columns concerned.
- * The message is one line that names all three, ready to print.
+ * The message is one line that names all three, ready to print: line breaks quoted from the
+ * input (a header cell with a CR or U+2028 in it) are written as escapes.
  */
 export class InputError extends Error {
   constructor(
@@ -9,7 +12,7 @@ export class InputError extends Error {
     readonly line = 0,
     readonly columns: readonly string[] = [],
   ) {
-    super(message);
+    super(oneLine(message));
     this.name = 'InputError';
   }
 

@@ -101,12 +101,14 @@ export const presetPathSchema = z.discriminatedUnion('preset', [
  * at a million samples. The first bad value is named by its index.
  */
 const column = z.custom<number[]>().superRefine((values, ctx) => {
+  // A column that is no list stops the checks of the path around it (continue: false), which
+  // read every column's length.
   if (values === undefined) {
-    ctx.addIssue({ code: 'custom', message: 'is missing' });
+    ctx.addIssue({ code: 'custom', message: 'is missing', continue: false });
     return;
   }
   if (!Array.isArray(values)) {
-    ctx.addIssue({ code: 'custom', message: 'must be a list of numbers' });
+    ctx.addIssue({ code: 'custom', message: 'must be a list of numbers', continue: false });
     return;
   }
   if (values.length === 0) {

@@ -1,6 +1,7 @@
 import type { PathState } from './pathState';
 import { pathState } from './pathState';
 import type { PathColumns } from './sampledPath';
+import { sampleTime } from './sampleTime';
 
 /** A motion known in closed form: writes the state at time t (s) into out. */
 export type AnalyticMotion = (t: number, out: PathState) => void;
@@ -31,7 +32,7 @@ export function sampleMotion(
   };
   const s = pathState();
   for (let i = 0; i < n; i++) {
-    const t = n === 1 ? t0 : t0 + ((t1 - t0) * i) / (n - 1);
+    const t = sampleTime(t0, t1, i, n);
     motion(t, s);
     cols.t[i] = t;
     cols.x[i] = s.px;

@@ -1,6 +1,8 @@
 import { all, create, type EvalFunction, type MathNode } from 'mathjs';
+import { oneLine } from '../io/oneLine';
 import { SPEED_OF_LIGHT } from '../physics/constants';
 import type { PathColumns } from './sampledPath';
+import { sampleTime } from './sampleTime';
 
 /** x(t), y(t), z(t) in m as formulas in t (s). */
 export interface MotionExpressions {
@@ -23,18 +25,22 @@ const MAX_NESTING = 64;
  * when the formula failed at one sample time; `detail` is the reason with that time.
  */
 export class ExpressionError extends Error {
+  readonly reason: string;
   readonly detail: string;
 
   constructor(
     readonly field: ExpressionField,
-    readonly reason: string,
+    reason: string,
     readonly time?: number,
   ) {
+    // mathjs quotes the formula in some messages; a line break in it must not split ours.
+    const bare = oneLine(reason);
     const at = time === undefined ? '' : ` at t = ${formatTime(time)} s`;
     const label = field === 'x' || field === 'y' || field === 'z' ? `${field}(t)` : field;
-    super(`${label}${at}: ${reason}`);
+    super(`${label}${at}: ${bare}`);
     this.name = 'ExpressionError';
-    this.detail = time === undefined ? reason : `${reason} (at t = ${formatTime(time)} s)`;
+    this.reason = bare;
+    this.detail = time === undefined ? bare : `${bare} (at t = ${formatTime(time)} s)`;
   }
 }
 
@@ -190,7 +196,7 @@ export function expressionColumns(
   };
   const position: [number, number, number] = [0, 0, 0];
   for (let i = 0; i < samples; i++) {
-    const t = i === samples - 1 ? to : from + ((to - from) * i) / (samples - 1);
+    const t = sampleTime(from, to, i, samples);
     motion(t, position);
     columns.t[i] = t;
     columns.x[i] = position[0];

@@ -222,7 +222,7 @@ export class SampledPath {
       const speed = Math.hypot(this.vx[i], this.vy[i], this.vz[i]);
       if (!(speed < c)) {
         throw new PathError(
-          `speed reaches ${fraction(speed)} c at sample ${i + 1} (counting from 1; t = ${this.t[i]} s); a charge must move slower than light`,
+          `${speedReached(speed)} at sample ${i + 1} (counting from 1; t = ${this.t[i]} s); a charge must move slower than light`,
           i,
           'v',
         );
@@ -237,7 +237,7 @@ export class SampledPath {
           const inner = Math.hypot(probe.vx, probe.vy, probe.vz);
           if (!(inner < c)) {
             throw new PathError(
-              `speed reaches ${fraction(inner)} c between samples ${i + 1} and ${i + 2} (counting from 1; t = ${t0 + s * h} s); a charge must move slower than light`,
+              `${speedReached(inner)} between samples ${i + 1} and ${i + 2} (counting from 1; t = ${t0 + s * h} s); a charge must move slower than light`,
               i,
               'v',
             );
@@ -286,8 +286,10 @@ function hermite(
   return coefficients;
 }
 
-function fraction(speed: number): string {
-  return Number.isFinite(speed) ? (speed / SPEED_OF_LIGHT).toPrecision(6) : String(speed);
+/** "speed reaches 1.00006 c", or why no speed could be had (numbers too large to differentiate). */
+function speedReached(speed: number): string {
+  if (Number.isFinite(speed)) return `speed reaches ${(speed / SPEED_OF_LIGHT).toPrecision(6)} c`;
+  return `the velocity cannot be computed (${speed}: positions or times too large for a finite derivative)`;
 }
 
 function copyColumn(values: ArrayLike<number>, n: number, name: string): Float64Array {

@@ -113,7 +113,18 @@ function velocitiesFromMomentum(table: CsvTable): Pick<PathColumns, 'vx' | 'vy' 
   const vy = new Float64Array(n);
   const vz = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    const scale = SPEED_OF_LIGHT / Math.sqrt(1 + ux[i] * ux[i] + uy[i] * uy[i] + uz[i] * uz[i]);
+    const squared = 1 + ux[i] * ux[i] + uy[i] * uy[i] + uz[i] * uz[i];
+    if (squared === Number.POSITIVE_INFINITY) {
+      // |βγ| past about 1e154 overflows when squared; v is then c along βγ to the last bit.
+      const size = Math.max(Math.abs(ux[i]), Math.abs(uy[i]), Math.abs(uz[i]));
+      const [sx, sy, sz] = [ux[i] / size, uy[i] / size, uz[i] / size];
+      const scale = SPEED_OF_LIGHT / Math.sqrt(sx * sx + sy * sy + sz * sz);
+      vx[i] = sx * scale;
+      vy[i] = sy * scale;
+      vz[i] = sz * scale;
+      continue;
+    }
+    const scale = SPEED_OF_LIGHT / Math.sqrt(squared);
     vx[i] = ux[i] * scale;
     vy[i] = uy[i] * scale;
     vz[i] = uz[i] * scale;

@@ -147,6 +147,20 @@ describe('parseCsvTable', () => {
     );
   });
 
+  it('keeps a message on one line when the text it quotes holds a line break', () => {
+    // A file with old Mac line ends (CR only) is one long header line; U+2028 and U+2029 are
+    // line terminators too (ECMA-262 §12.3). Found by test/path/trajectoryCsv.property.test.ts.
+    expect(parseError('x,y,z\r1,2,3\r').message).toBe(
+      'points.csv line 1, column "z\\r1": unknown column; allowed: x, y, z, t',
+    );
+    expect(parseError('x,y,z\n1,2\u20283,4\n').message).toBe(
+      'points.csv line 2, column "y": not a number: "2\\u20283"',
+    );
+    expect(parseError('x,y\u2029y,z\n').message).toBe(
+      'points.csv line 1, column "y\\u2029y": unknown column; allowed: x, y, z, t',
+    );
+  });
+
   it('says when the first row holds numbers instead of column names', () => {
     expect(parseError('1,2,3\n').message).toBe(
       'points.csv line 1: expected a header row naming the columns (x, y, z, t), got "1,2,3"',

@@ -234,6 +234,33 @@ describe('parseScenario rejects, naming the field', () => {
   it('text that is not JSON', () => {
     expect(() => parseScenarioText('{ "format": ')).toThrow(/^scenario: not valid JSON/);
   });
+
+  it('text that is not JSON in one line, though the JSON parser quotes its line breaks', () => {
+    // V8's message quotes the text around the fault. Found by test/io/scenario.property.test.ts.
+    expect(() => parseScenarioText('[1,\n2,\r\nfoo\n]')).toThrow(
+      /^scenario: not valid JSON \(Unexpected token 'o', "\[1,\\n2,\\r\\nfoo\\n\]" is not valid JSON\)$/,
+    );
+  });
+
+  it('an unknown field whose name holds a line separator, in one line', () => {
+    // JSON.stringify leaves U+2028 as it is. Found by test/io/scenario.property.test.ts.
+    expect(messageOf({ ...base(), 'a\u2028b': 1 })).toBe('scenario: unknown field "a\\u2028b"');
+  });
+
+  it('a samples path whose t is missing or no list, without reading its length', () => {
+    // These threw a TypeError from the length check of the path. Found by
+    // test/io/scenario.property.test.ts.
+    const path = { kind: 'samples', x: [0, 1], y: [0, 0], z: [0, 0] };
+    expect(messageOf(withField(['charges', 0, 'path'], path))).toBe(
+      'charges[0].path.t: is missing',
+    );
+    expect(messageOf(withField(['charges', 0, 'path'], { ...path, t: 5 }))).toBe(
+      'charges[0].path.t: must be a list of numbers',
+    );
+    expect(messageOf(withField(['charges', 0, 'path'], { ...path, t: [0, 1], vx: 'fast' }))).toBe(
+      'charges[0].path.vx: must be a list of numbers',
+    );
+  });
 });
 
 describe('buildCharges', () => {

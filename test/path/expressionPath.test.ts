@@ -105,6 +105,13 @@ describe('compileMotion refuses hostile and non-numeric input without running it
     expect(expressionErrorOf(() => compileMotion(at(formula))).message).toBe(`x(t): ${reason}`);
   });
 
+  it('a formula whose parse error quotes a line break, in one line', () => {
+    // mathjs quotes the part it stopped at. Found by test/path/expressionPath.property.test.ts.
+    const error = expressionErrorOf(() => compileMotion(at('t +\u2028 1')));
+    expect(error.message).toBe('x(t): syntax error in part "\\u2028 1" at character 4');
+    expect(error.detail).toBe('syntax error in part "\\u2028 1" at character 4');
+  });
+
   it('a formula longer than the limit, before parsing it', () => {
     const long = `t${'+t'.repeat(MAX_EXPRESSION_LENGTH)}`;
     expect(expressionErrorOf(() => compileMotion(at('0', long))).message).toBe(
@@ -162,6 +169,17 @@ describe('expressionColumns', () => {
       // measured at 4.5e-8 of Aω, so 1e-6 leaves margin and still fails a wrong derivative.
       expect(Math.abs(s.vx + 0.01 * w * Math.sin(w * t)) / (0.01 * w)).toBeLessThan(1e-6);
     }
+  });
+
+  it('samples a range as wide as doubles allow at finite, increasing times', () => {
+    // (to − from)·i overflowed to Infinity here. Found by
+    // test/path/expressionPath.property.test.ts.
+    expect(Array.from(expressionColumns(at('0'), -1e308, 0, 4).t)).toEqual([
+      -1e308, -6.666666666666667e307, -3.3333333333333337e307, 0,
+    ]);
+    expect(Array.from(expressionColumns(at('0'), -1e308, 1e308, 5).t)).toEqual([
+      -1e308, -5e307, 0, 5e307, 1e308,
+    ]);
   });
 
   it.each([

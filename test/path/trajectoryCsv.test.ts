@@ -149,6 +149,16 @@ describe('trajectory units and βγ columns', () => {
     expect(Math.abs((c - s.vx) / c / 5.0000000125e-9 - 1)).toBeLessThan(1e-7);
   });
 
+  it('refuses βγ too large to square in a double as the speed of light, not as rest', () => {
+    // |βγ|² overflows past about 1.3e154; v = cβγ/√(1 + |βγ|²) is then c to the last bit.
+    // Found by test/path/trajectoryCsv.property.test.ts, which read 1e200 as v = 0.
+    for (const row of ['1e200,0,0', '-3e200,4e200,0', '1.7976931348623157e308,0,1']) {
+      expect(trajectoryError(`t,x,y,z,bgx,bgy,bgz\n0,0,0,0,${row}\n1,1,0,0,1,0,0\n`).message).toBe(
+        'beam.csv line 2, columns "bgx", "bgy", "bgz": speed reaches 1.00000 c at sample 1 (counting from 1; t = 0 s); a charge must move slower than light',
+      );
+    }
+  });
+
   it('refuses velocities given twice, naming both groups', () => {
     expect(trajectoryError('t,x,y,z,vx,vy,vz,bgx,bgy,bgz\n0,0,0,0,0,0,0,0,0,0\n').message).toBe(
       'beam.csv line 1, columns "vx", "vy", "vz", "bgx", "bgy", "bgz": give the velocity once: as vx, vy, vz or as βγ in bgx, bgy, bgz, not both',
