@@ -1,5 +1,6 @@
 import { pathState } from '../path/pathState';
 import type { Charge } from '../physics/charge';
+import { VACUUM_PERMEABILITY } from '../physics/constants';
 import { clearFields, fieldSample } from '../physics/fieldSample';
 import { addLienardWiechert } from '../physics/lienardWiechert';
 import { retardedSolution, solveRetardedTime } from '../physics/retardedTime';
@@ -21,6 +22,14 @@ export interface KernelStats {
   iterations: number;
   maxIterations: number;
 }
+
+/**
+ * Largest |E| (V/m) and |S| (W/m²) a slice stores: float32 ends at 3.4e38, and S = E × B/μ0
+ * is formed later from the stored, rounded E and B, so keep a margin (|S| <= |E||B|/μ0).
+ */
+const FLOAT32_SAFE = 1e38;
+const SAFE_E2 = FLOAT32_SAFE * FLOAT32_SAFE;
+const SAFE_EB2 = (FLOAT32_SAFE * VACUUM_PERMEABILITY) ** 2;
 
 const state = pathState();
 const solution = retardedSolution();
@@ -65,6 +74,14 @@ export function computeSliceRows(
   const firstOfRow = new Float64Array(chargeCount);
   const hints = new Int32Array(chargeCount).fill(-1);
   const near2 = nearRadius * nearRadius;
+  // Each charge's position at the slice time, where a grid point would be exactly on it.
+  const present = new Float64Array(3 * chargeCount);
+  for (let k = 0; k < chargeCount; k++) {
+    charges[k].path.stateAt(time, state);
+    present[3 * k] = state.px;
+    present[3 * k + 1] = state.py;
+    present[3 * k + 2] = state.pz;
+  }
   let iterations = 0;
   let maxIterations = 0;
   for (let j = j0; j < j1; j++) {
@@ -88,21 +105,40 @@ export function computeSliceRows(
           const previous = warm[k * points + p];
           if (!Number.isNaN(previous)) guess = previous;
         }
-        solveRetardedTime(path, rx, ry, rz, time, state, solution, guess, hints[k]);
-        hints[k] = solution.piece;
+        // Exactly at the charge's present position the delay is 0, a root that a warm start
+        // approaches only by halving (or misses, by the rounding of the path's position).
+        const exactlyOn =
+          rx === present[3 * k] && ry === present[3 * k + 1] && rz === present[3 * k + 2];
+        let delay = 0;
+        if (!exactlyOn) {
+          solveRetardedTime(path, rx, ry, rz, time, state, solution, guess, hints[k]);
+          hints[k] = solution.piece;
+          delay = solution.delay;
+          iterations += solution.iterations;
+          if (solution.iterations > maxIterations) maxIterations = solution.iterations;
+        }
         previousGuesses[k] = guesses[k];
-        guesses[k] = solution.delay;
-        if (warm !== null) warm[k * points + p] = solution.delay;
-        iterations += solution.iterations;
-        if (solution.iterations > maxIterations) maxIterations = solution.iterations;
-        if (k === 0) planes[oDelay + p] = solution.delay;
-        if (i === 0) firstOfRow[k] = solution.delay;
+        guesses[k] = delay;
+        if (warm !== null) warm[k * points + p] = delay;
+        if (k === 0) planes[oDelay + p] = delay;
+        if (i === 0) firstOfRow[k] = delay;
         if (onCharge) continue;
+        if (exactlyOn) {
+          onCharge = true;
+          continue;
+        }
         const dx = rx - state.px;
         const dy = ry - state.py;
         const dz = rz - state.pz;
         if (!(dx * dx + dy * dy + dz * dz > near2)) onCharge = true;
         else if (!addLienardWiechert(charge, rx, ry, rz, state, sample)) onCharge = true;
+      }
+      if (!onCharge) {
+        // A point so near a charge that E, E_rad or S would overflow float32 is flagged too.
+        const e2 = sample.ex * sample.ex + sample.ey * sample.ey + sample.ez * sample.ez;
+        const r2 = sample.erx * sample.erx + sample.ery * sample.ery + sample.erz * sample.erz;
+        const b2 = sample.bx * sample.bx + sample.by * sample.by + sample.bz * sample.bz;
+        onCharge = !(e2 <= SAFE_E2 && r2 <= SAFE_E2 && e2 * b2 <= SAFE_EB2);
       }
       if (onCharge) {
         mask[p] = MASK_ON_CHARGE;

@@ -31,7 +31,10 @@ export const PLANE_UNITS: Record<PlaneKey, string> = {
 
 /** Mask values per point. */
 export const MASK_CLEAR = 0;
-/** The point lies on or within the near radius of a charge; its fields are zero. */
+/**
+ * The point lies on or within the near radius of a charge, or so near one that E, E_rad or
+ * S = E × B/μ0 would overflow float32; its fields are zero.
+ */
 export const MASK_ON_CHARGE = 1;
 
 export interface SliceFields {

@@ -50,7 +50,8 @@ export const COMPONENT_MEANINGS: Record<Component, string> = {
   Sy: 'Poynting vector E x B / mu0',
   Sz: 'Poynting vector E x B / mu0',
   delay: 'light travel time t - t_ret from the first charge',
-  on_charge: '1 where the point is on a charge (fields set to 0)',
+  on_charge:
+    '1 where the point is on a charge, within nearRadius of one, or so near that E or S would exceed float32 (fields set to 0)',
 };
 
 export function isQuantity(name: string): name is Quantity {

@@ -45,7 +45,7 @@ export function describeSlice(
     units: Object.fromEntries(components.map((c) => [c, COMPONENT_UNITS[c]])),
     meanings: Object.fromEntries(components.map((c) => [c, COMPONENT_MEANINGS[c]])),
     positionUnits: 'm',
-    note: 'SI units; fields are zero where on_charge = 1 (within nearRadius m of a charge).',
+    note: 'SI units; fields are zero where on_charge = 1 (within nearRadius m of a charge, or so near one that E or S would exceed float32).',
   };
 }
 
@@ -87,7 +87,7 @@ export function sliceToCsv(
     `# conecast ${CONECAST_VERSION} slice; time ${spec.time} s; ${spec.nx} x ${spec.ny} points`,
     `# spec ${JSON.stringify(spec)}`,
     `# units x,y,z m; ${components.map((c) => `${c} ${description.units[c]}`).join('; ')}`,
-    `# rows in order j*nx + i; fields are 0 where on_charge (within ${nearRadius} m of a charge)`,
+    `# rows in order j*nx + i; fields are 0 where on_charge (within ${nearRadius} m of a charge, or so near one that E or S would exceed float32)`,
     ['x', 'y', 'z', ...components].join(','),
   ];
   const point: Triple = [0, 0, 0];

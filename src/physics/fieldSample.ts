@@ -14,6 +14,11 @@ export interface FieldSample {
   erz: number;
   /** Retarded time of the (first) charge, s. */
   tRet: number;
+  /**
+   * Light travel time t - tRet from the (first) charge, s, as solved: unlike t - tRet formed
+   * afterwards, it keeps full relative precision where the delay is tiny against t.
+   */
+  delay: number;
   /** Doppler factor 1 - n·β at the retarded time of the (first) charge. */
   doppler: number;
   /** Distance from the retarded position, m. */
@@ -34,6 +39,7 @@ export function fieldSample(): FieldSample {
     ery: 0,
     erz: 0,
     tRet: 0,
+    delay: 0,
     doppler: 1,
     distance: 0,
     onCharge: false,

@@ -10,8 +10,8 @@ const state = pathState();
 const solution = retardedSolution();
 
 /**
- * E, B and the radiation part of E at (r, t), superposed over the charges. tRet, doppler and
- * distance describe the first charge. Where r lies within `nearRadius` (m) of any charge's
+ * E, B and the radiation part of E at (r, t), superposed over the charges. tRet, delay, doppler
+ * and distance describe the first charge. Where r lies within `nearRadius` (m) of any charge's
  * retarded position the result is all zero with `onCharge` set, never NaN or Infinity.
  */
 export function evaluateFields(
@@ -26,6 +26,7 @@ export function evaluateFields(
   clearFields(out);
   out.onCharge = false;
   out.tRet = t;
+  out.delay = 0;
   out.doppler = 1;
   out.distance = 0;
   for (let k = 0; k < charges.length; k++) {
@@ -34,6 +35,7 @@ export function evaluateFields(
     const distance = Math.hypot(rx - state.px, ry - state.py, rz - state.pz);
     if (k === 0) {
       out.tRet = solution.tRet;
+      out.delay = solution.delay;
       out.doppler = dopplerFactor(rx, ry, rz, state);
       out.distance = distance;
     }

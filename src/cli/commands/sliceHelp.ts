@@ -42,7 +42,8 @@ ${Object.entries(QUANTITIES)
                   (ms is the engine's own compute time; samples counts all path samples)
   --threads N     worker threads (default: one per core; 1 computes on the main thread)
   --near-radius R points closer than R (m) to a charge are masked: fields 0, on_charge 1
-                  (default a quarter of the smaller cell side)
+                  (default a quarter of the smaller cell side); so are points so near a
+                  charge that E or S would exceed what float32 holds (never Infinity)
   -h, --help      show this help
 
 Grid: point (i, j) sits at centre + ((i+0.5)/NX - 0.5) W u + ((j+0.5)/NY - 0.5) H v.
