@@ -17,7 +17,13 @@ import {
 export { ScenarioError } from './scenarioError';
 export { OLDEST_SCENARIO_VERSION } from './scenarioMigrations';
 export { rememberBuiltPath } from './scenarioPaths';
-export { MAX_PATH_SAMPLES, MAX_PROBES, SCENARIO_FORMAT, SCENARIO_VERSION } from './scenarioSchema';
+export {
+  MAX_PATH_SAMPLES,
+  MAX_PROBES,
+  type SampleColumn,
+  SCENARIO_FORMAT,
+  SCENARIO_VERSION,
+} from './scenarioSchema';
 
 export type Scenario = z.infer<typeof scenarioSchema>;
 export type ScenarioCharge = Scenario['charges'][number];

@@ -13,7 +13,10 @@ const MAX_UNPACKED_BYTES = 16 * 1024 * 1024;
  * would be longer than MAX_LINK_CHARS (a scenario with imported samples usually is).
  */
 export async function encodeScenarioLink(scenario: Scenario): Promise<string> {
-  const packed = await pipe(new TextEncoder().encode(JSON.stringify(scenario)), 'compress');
+  const text = JSON.stringify(scenario, (_key, value) =>
+    value instanceof Float64Array ? Array.from(value) : value,
+  );
+  const packed = await pipe(new TextEncoder().encode(text), 'compress');
   const payload = toBase64Url(packed);
   if (payload.length > MAX_LINK_CHARS) {
     throw new ScenarioError(

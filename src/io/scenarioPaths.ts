@@ -14,7 +14,7 @@ import { PathError, SampledPath } from '../path/sampledPath';
 import { SketchError, sketchColumns } from '../path/sketchPath';
 import type { ScenarioPath } from './scenario';
 import { fieldPath, ScenarioError } from './scenarioError';
-import { type presetPathSchema, sketchIssuePath } from './scenarioSchema';
+import { type presetPathSchema, type SampleColumn, sketchIssuePath } from './scenarioSchema';
 
 /**
  * Paths already built. Parsing a document makes new objects, so paths are found by content:
@@ -23,7 +23,7 @@ import { type presetPathSchema, sketchIssuePath } from './scenarioSchema';
  * charge changed, undo) then reuses its samples instead of sampling a formula or solving a
  * million-point spline again, and undo history shares them instead of holding copies.
  */
-const bySamples = new WeakMap<number[], { columns: unknown[]; sampled: SampledPath }>();
+const bySamples = new WeakMap<SampleColumn, { columns: unknown[]; sampled: SampledPath }>();
 const byText = new Map<string, SampledPath>();
 /** Paths remembered by text; the least recently used goes first. */
 const TEXT_CACHE_SIZE = 16;

@@ -97,36 +97,46 @@ export const presetPathSchema = z.discriminatedUnion('preset', [
 ]);
 
 /**
+ * A column of samples as a document gives it: a list of numbers (JSON) or a Float64Array. A
+ * parsed document always holds Float64Array: compact, copied in one block when stored or
+ * sent, and passed through as it is when the document is parsed again after an edit.
+ */
+export type SampleColumn = number[] | Float64Array;
+
+/**
  * A column of numbers, checked in one plain loop: zod's per-element array check costs seconds
  * at a million samples. The first bad value is named by its index.
  */
-const column = z.custom<number[]>().superRefine((values, ctx) => {
-  // A column that is no list stops the checks of the path around it (continue: false), which
-  // read every column's length.
-  if (values === undefined) {
-    ctx.addIssue({ code: 'custom', message: 'is missing', continue: false });
-    return;
-  }
-  if (!Array.isArray(values)) {
-    ctx.addIssue({ code: 'custom', message: 'must be a list of numbers', continue: false });
-    return;
-  }
-  if (values.length === 0) {
-    ctx.addIssue({ code: 'custom', message: 'must hold at least 1 value' });
-    return;
-  }
-  if (values.length > MAX_PATH_SAMPLES) {
-    ctx.addIssue({ code: 'custom', message: `must hold at most ${MAX_PATH_SAMPLES} values` });
-    return;
-  }
-  for (let i = 0; i < values.length; i++) {
-    const value: unknown = values[i];
-    if (typeof value !== 'number' || !Number.isFinite(value)) {
-      ctx.addIssue({ code: 'custom', path: [i], message: 'must be a number' });
+const column = z
+  .custom<SampleColumn>()
+  .superRefine((values, ctx) => {
+    // A column that is no list stops the checks of the path around it (continue: false), which
+    // read every column's length.
+    if (values === undefined) {
+      ctx.addIssue({ code: 'custom', message: 'is missing', continue: false });
       return;
     }
-  }
-});
+    if (!Array.isArray(values) && !(values instanceof Float64Array)) {
+      ctx.addIssue({ code: 'custom', message: 'must be a list of numbers', continue: false });
+      return;
+    }
+    if (values.length === 0) {
+      ctx.addIssue({ code: 'custom', message: 'must hold at least 1 value' });
+      return;
+    }
+    if (values.length > MAX_PATH_SAMPLES) {
+      ctx.addIssue({ code: 'custom', message: `must hold at most ${MAX_PATH_SAMPLES} values` });
+      return;
+    }
+    for (let i = 0; i < values.length; i++) {
+      const value: unknown = values[i];
+      if (typeof value !== 'number' || !Number.isFinite(value)) {
+        ctx.addIssue({ code: 'custom', path: [i], message: 'must be a number' });
+        return;
+      }
+    }
+  })
+  .transform((values) => (values instanceof Float64Array ? values : Float64Array.from(values)));
 
 const OPTIONAL_GROUPS = [
   ['vx', 'vy', 'vz'],

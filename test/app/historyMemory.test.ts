@@ -15,10 +15,10 @@ describe('undo history with a million-sample path', () => {
     const dt = 1e-15;
     const path: ScenarioSamplesPath = {
       kind: 'samples',
-      t: Array.from({ length: n }, (_, i) => i * dt),
-      x: Array.from({ length: n }, (_, i) => 1.5e8 * i * dt),
-      y: new Array<number>(n).fill(0),
-      z: new Array<number>(n).fill(0),
+      t: Float64Array.from({ length: n }, (_, i) => i * dt),
+      x: Float64Array.from({ length: n }, (_, i) => 1.5e8 * i * dt),
+      y: new Float64Array(n),
+      z: new Float64Array(n),
     };
     expect(
       store.getState().editCharges(withPath(store.getState().scenario!.charges, 0, path), 'import'),

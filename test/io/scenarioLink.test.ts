@@ -61,9 +61,9 @@ describe('a scenario link', () => {
     // Noisy samples, as a tracking code writes them, do not compress away.
     const random = mulberry32(61);
     const n = 200_000;
-    const t = Array.from({ length: n }, (_, i) => i * 1e-12 + random() * 1e-15);
-    const x = Array.from({ length: n }, () => random());
-    const zero = new Array<number>(n).fill(0);
+    const t = Float64Array.from({ length: n }, (_, i) => i * 1e-12 + random() * 1e-15);
+    const x = Float64Array.from({ length: n }, () => random());
+    const zero = new Float64Array(n);
     const large = {
       ...demo,
       charges: [{ ...demo.charges[0], path: { kind: 'samples' as const, t, x, y: zero, z: zero } }],

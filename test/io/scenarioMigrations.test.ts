@@ -73,7 +73,7 @@ describe('a newer or foreign document', () => {
 describe('formatScenario', () => {
   const current = () => {
     const scenario = parseScenario(versionOne());
-    return {
+    return parseScenario({
       ...scenario,
       probes: [{ name: 'near', position: [0.1, -0.2, 1e-9] as [number, number, number] }],
       charges: [
@@ -88,12 +88,26 @@ describe('formatScenario', () => {
           },
         },
       ],
-    };
+    });
   };
 
   it('reads back to the same document, every number exact', () => {
     const scenario = current();
-    expect(parseScenarioText(formatScenario(scenario))).toEqual(scenario);
+    const again = parseScenarioText(formatScenario(scenario));
+    expect(again).toEqual(scenario);
+    const path = again.charges[0].path;
+    // Down to the bit: 0.1 + 0.2 and a subnormal-scale value survive the text.
+    expect(path.kind === 'samples' && Array.from(path.y)).toEqual([0.1, 0.2, 0.30000000000000004]);
+    expect(path.kind === 'samples' && path.x[2]).toBe(-2.5e-300);
+  });
+
+  it('holds sample columns as Float64Array and passes them through when parsed again', () => {
+    const parsed = current();
+    const path = parsed.charges[0].path;
+    expect(path.kind === 'samples' && path.t).toBeInstanceOf(Float64Array);
+    const again = parseScenario(parsed).charges[0].path;
+    // Passed through as they are: an edit elsewhere never copies a million samples.
+    expect(again.kind === 'samples' && again.t).toBe(path.kind === 'samples' && path.t);
   });
 
   it('keeps a list of numbers on one line', () => {
