@@ -1,10 +1,16 @@
-import { pathToTransfer, transferBuffers } from '../path/pathTransfer';
+import { pathToSharedTransfer, pathToTransfer, transferBuffers } from '../path/pathTransfer';
 import type { Charge } from '../physics/charge';
 import { defaultNearRadius } from './computeSlice';
 import { computeSliceRows, type KernelStats } from './sliceKernel';
 import { allocateSliceFields, PLANE_COUNT, type SliceFields } from './slicePlanes';
 import type { SliceSpec } from './sliceSpec';
-import { COMMANDS, REPLIES, type WorkerPort, type WorkerReply } from './workerProtocol';
+import {
+  COMMANDS,
+  REPLIES,
+  type SceneCommand,
+  type WorkerPort,
+  type WorkerReply,
+} from './workerProtocol';
 
 export interface SlicePoolOptions {
   /** Makes one worker; omitted or size 0 means every slice runs on the calling thread. */
@@ -76,6 +82,8 @@ export class SlicePool {
   private readonly clock: () => number;
   private readonly timeoutMs: number;
   private charges: readonly Charge[] = [];
+  /** The scene in shared memory, made once per scene and read by every worker. */
+  private sharedScene: SceneCommand['charges'] | null = null;
   private sceneId = 0;
   private nextId = 1;
   private phase: Phase | null = null;
@@ -99,6 +107,7 @@ export class SlicePool {
   /** Sends new charges to every worker; later requests use them. */
   setScene(charges: readonly Charge[]): void {
     this.charges = charges;
+    this.sharedScene = null;
     this.sceneId++;
     for (const slot of this.slots) this.postScene(slot.port);
   }
@@ -359,6 +368,15 @@ export class SlicePool {
   }
 
   private postScene(port: WorkerPort): void {
+    if (typeof SharedArrayBuffer === 'function') {
+      this.sharedScene ??= this.charges.map((c) => ({
+        charge: c.charge,
+        path: pathToSharedTransfer(c.path),
+      }));
+      port.post({ type: COMMANDS.scene, sceneId: this.sceneId, charges: this.sharedScene }, []);
+      return;
+    }
+    // Without shared memory each worker gets its own copy, handed over rather than cloned.
     const charges = this.charges.map((c) => ({ charge: c.charge, path: pathToTransfer(c.path) }));
     const transfer = charges.flatMap((c) => transferBuffers(c.path));
     port.post({ type: COMMANDS.scene, sceneId: this.sceneId, charges }, transfer);

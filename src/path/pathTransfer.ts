@@ -18,6 +18,25 @@ export function pathToTransfer(path: SampledPath): PathTransfer {
   };
 }
 
+const COLUMNS = ['t', 'x', 'y', 'z', 'vx', 'vy', 'vz', 'ax', 'ay', 'az'] as const;
+
+/**
+ * The path's columns copied once into shared memory, which every worker can read without a
+ * copy of its own: a million-sample scene is 80 MB. Needs SharedArrayBuffer (a cross-origin
+ * isolated page, or Node).
+ */
+export function pathToSharedTransfer(path: SampledPath): PathTransfer {
+  const n = path.count;
+  const memory = new SharedArrayBuffer(COLUMNS.length * n * Float64Array.BYTES_PER_ELEMENT);
+  const columns = {} as Record<(typeof COLUMNS)[number], Float64Array>;
+  COLUMNS.forEach((name, k) => {
+    const view = new Float64Array(memory, k * n * Float64Array.BYTES_PER_ELEMENT, n);
+    view.set(path[name]);
+    columns[name] = view;
+  });
+  return { ...columns, maxSpeed: path.maxSpeed };
+}
+
 export function transferBuffers(p: PathTransfer): ArrayBuffer[] {
   return [p.t, p.x, p.y, p.z, p.vx, p.vy, p.vz, p.ax, p.ay, p.az].map(
     (a) => a.buffer as ArrayBuffer,
