@@ -3,6 +3,7 @@ import { useEffect, useMemo } from 'react';
 import { BufferGeometry, Float32BufferAttribute, Line } from 'three';
 import type { Triple } from '../../src/engine/sliceSpec';
 import type { Charge } from '../../src/physics/charge';
+import { drawnSamples } from './pathVertices';
 
 // <line> is taken by SVG in JSX, so three's Line is registered under r3f's <threeLine> name.
 extend({ ThreeLine: Line });
@@ -22,11 +23,14 @@ export function ChargePaths({ origin, charges, selected }: ChargePathsProps) {
   const geometries = useMemo(
     () =>
       charges.map(({ path }) => {
-        const positions = new Float32Array(3 * path.count);
-        for (let i = 0; i < path.count; i++) {
-          positions[3 * i] = path.x[i] - origin[0];
-          positions[3 * i + 1] = path.y[i] - origin[1];
-          positions[3 * i + 2] = path.z[i] - origin[2];
+        // A long imported path is drawn through a thinned set of its samples.
+        const samples = drawnSamples(path.count);
+        const positions = new Float32Array(3 * samples.length);
+        for (let v = 0; v < samples.length; v++) {
+          const i = samples[v];
+          positions[3 * v] = path.x[i] - origin[0];
+          positions[3 * v + 1] = path.y[i] - origin[1];
+          positions[3 * v + 2] = path.z[i] - origin[2];
         }
         const geometry = new BufferGeometry();
         geometry.setAttribute('position', new Float32BufferAttribute(positions, 3));
