@@ -1,7 +1,6 @@
 import type { AppState } from '../store/appState';
 import type { AppStore } from '../store/appStore';
 import { scenarioDocument } from './scenarioDocument';
-import { packScenario } from './storedScenario';
 import type { WorkStore } from './workStore';
 
 /** Quiet time after the last change before the work is saved, ms: a drag saves once. */
@@ -70,7 +69,7 @@ export function startAutosave(store: AppStore, workStore: WorkStore): AutosaveCo
     writing = writing.then(async () => {
       const savedAt = Date.now();
       try {
-        await workStore.save({ id, savedAt, title: document.title }, packScenario(document));
+        await workStore.save({ id, savedAt, title: document.title }, document);
       } catch (error) {
         const reason = error instanceof Error ? error.message : String(error);
         store.getState().setWorkState({

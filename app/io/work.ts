@@ -3,7 +3,6 @@ import { decodeScenarioLink, linkPayloadOf } from '../../src/io/scenarioLink';
 import { appStore } from '../store/appStore';
 import { type AutosaveControl, startAutosave } from './autosave';
 import { DEMO_SCENARIO_URL, openScenario } from './openScenario';
-import { unpackScenario } from './storedScenario';
 import { type WorkRecord, WorkStore } from './workStore';
 
 /** The browser's store of work in progress (IndexedDB). */
@@ -95,7 +94,7 @@ export async function openWork(record: WorkRecord): Promise<string | null> {
   try {
     const stored = await workStore.load(record.id);
     if (stored === undefined) return 'it is no longer kept';
-    const scenario = parseScenario(unpackScenario(stored));
+    const scenario = parseScenario(stored);
     const state = appStore.getState();
     state.openScenarioDocument(
       scenario,

@@ -1,65 +1,111 @@
 import 'fake-indexeddb/auto';
 import { readFileSync } from 'node:fs';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { startAutosave } from '../../app/io/autosave';
 import { scenarioDocument } from '../../app/io/scenarioDocument';
-import { packScenario, unpackScenario } from '../../app/io/storedScenario';
 import { WorkStore } from '../../app/io/workStore';
 import { createAppStore } from '../../app/store/appStore';
-import { parseScenario, parseScenarioText } from '../../src/io/scenario';
+import { parseScenario, parseScenarioText, type Scenario } from '../../src/io/scenario';
+import { formatScenario } from '../../src/io/scenarioText';
 
 const demoText = readFileSync(new URL('../../public/scenarios/demo.json', import.meta.url), 'utf8');
 const demo = parseScenarioText(demoText);
+/** The stored document as its file text, so Float64Array and list columns compare alike. */
+const asText = (stored: unknown) => formatScenario(parseScenario(stored));
+const textOf = (scenario: Scenario) => formatScenario(scenario);
 let databases = 0;
 /** Each test its own database, so none sees another's work. */
 const freshStore = () => new WorkStore(`conecast-test-${++databases}`);
 
-const samplesScenario = () => ({
-  ...demo,
-  charges: [
-    {
-      ...demo.charges[0],
-      path: {
-        kind: 'samples' as const,
-        t: [0, 1e-9, 2e-9],
-        x: [0, 0.1, 0.2],
-        y: [0, 0, 0],
-        z: [0, 0, 0],
+/** Invented: a document whose path has `n` samples, long enough to be kept apart when ≥ 4096. */
+const samplesScenario = (n = 3) =>
+  parseScenario({
+    ...demo,
+    charges: [
+      {
+        ...demo.charges[0],
+        path: {
+          kind: 'samples',
+          t: Array.from({ length: n }, (_, i) => i * 1e-12),
+          x: Array.from({ length: n }, (_, i) => i * 1e-4),
+          y: new Array(n).fill(0),
+          z: new Array(n).fill(0),
+        },
       },
-    },
-  ],
-});
+    ],
+  });
+
+/** Counts the values put under keys starting with `prefix` while `action` runs. */
+async function putsUnder(prefix: string, action: () => Promise<void>): Promise<number> {
+  const put = vi.spyOn(IDBObjectStore.prototype, 'put');
+  try {
+    await action();
+    return put.mock.calls.filter(([, key]) => String(key).startsWith(prefix)).length;
+  } finally {
+    put.mockRestore();
+  }
+}
 
 describe('the work store', () => {
   it('keeps, lists newest first, gives back and forgets work', async () => {
     const store = freshStore();
-    await store.save({ id: 'a', savedAt: 1000, title: 'first' }, packScenario(demo));
-    await store.save({ id: 'b', savedAt: 2000, title: 'second' }, packScenario(samplesScenario()));
+    await store.save({ id: 'a', savedAt: 1000, title: 'first' }, demo);
+    await store.save({ id: 'b', savedAt: 2000, title: 'second' }, samplesScenario(5000));
     expect((await store.list()).map((record) => record.id)).toEqual(['b', 'a']);
-    expect(parseScenario(unpackScenario(await store.load('b')))).toEqual(samplesScenario());
+    expect(asText(await store.load('b'))).toBe(textOf(samplesScenario(5000)));
     await store.remove('b');
     expect((await store.list()).map((record) => record.id)).toEqual(['a']);
     expect(await store.load('b')).toBeUndefined();
+    // Nothing of b is left behind, its long columns included.
+    expect(await store.columnKeys('b')).toEqual([]);
   });
 
   it('writes a record and its document together or not at all', async () => {
     const store = freshStore();
-    await store.save({ id: 'w', savedAt: 1000, title: 'kept' }, packScenario(demo));
+    await store.save({ id: 'w', savedAt: 1000, title: 'kept' }, demo);
     // A document the browser cannot store (a function in it) aborts the whole transaction,
-    // as a crash in the middle of a save would: the previous save stays whole.
-    const unstorable = { ...demo, note: () => 'not data' };
+    // as a crash in the middle of a save would: the previous save stays whole, and the long
+    // columns written first in that transaction are gone with it.
+    const unstorable = { ...samplesScenario(5000), note: () => 'not data' };
     await expect(
       store.save({ id: 'w', savedAt: 2000, title: 'lost' }, unstorable),
     ).rejects.toThrow();
     expect(await store.list()).toEqual([{ id: 'w', savedAt: 1000, title: 'kept' }]);
-    expect(parseScenario(unpackScenario(await store.load('w')))).toEqual(demo);
+    expect(asText(await store.load('w'))).toBe(textOf(demo));
+    expect(await store.columnKeys('w')).toEqual([]);
   });
 
-  it('stores sample columns as Float64Array and gives them back as plain lists', () => {
-    const packed = packScenario(samplesScenario()) as { charges: { path: { t: unknown } }[] };
-    expect(packed.charges[0].path.t).toBeInstanceOf(Float64Array);
-    const unpacked = unpackScenario(packed) as { charges: { path: { t: unknown } }[] };
-    expect(unpacked.charges[0].path.t).toEqual([0, 1e-9, 2e-9]);
+  it('writes a long column once, however often the work around it is saved', async () => {
+    const store = freshStore();
+    const scenario = samplesScenario(5000);
+    const record = { id: 'w', savedAt: 1000, title: 'track' };
+    expect(await putsUnder('column:', () => store.save(record, scenario))).toBe(4);
+    const moved = {
+      ...scenario,
+      probes: [{ name: 'P1', position: [0, 1, 0] as [number, number, number] }],
+    };
+    expect(await putsUnder('column:', () => store.save({ ...record, savedAt: 2000 }, moved))).toBe(
+      0,
+    );
+    expect(asText(await store.load('w'))).toBe(textOf(moved));
+    // A new path replaces the old columns, which are deleted in the same transaction.
+    const replaced = samplesScenario(6000);
+    expect(
+      await putsUnder('column:', () => store.save({ ...record, savedAt: 3000 }, replaced)),
+    ).toBe(4);
+    expect(await store.columnKeys('w')).toHaveLength(4);
+    expect(asText(await store.load('w'))).toBe(textOf(replaced));
+  });
+
+  it('knows the columns of work it reads back, and does not write them again', async () => {
+    const first = freshStore();
+    const scenario = samplesScenario(5000);
+    await first.save({ id: 'w', savedAt: 1000, title: 'track' }, scenario);
+    // A new page: a fresh store on the same database reads the work back, then saves it.
+    const second = new WorkStore(`conecast-test-${databases}`);
+    const restored = parseScenario(await second.load('w'));
+    const record = { id: 'w', savedAt: 2000, title: 'track' };
+    expect(await putsUnder('column:', () => second.save(record, restored))).toBe(0);
   });
 });
 
@@ -78,9 +124,7 @@ describe('autosave', () => {
     const [record] = await store.list();
     expect(record.title).toBe(demo.title);
     expect(app.getState().workId).toBe(record.id);
-    expect(parseScenario(unpackScenario(await store.load(record.id)))).toEqual(
-      scenarioDocument(app.getState()),
-    );
+    expect(asText(await store.load(record.id))).toBe(textOf(scenarioDocument(app.getState())!));
   });
 
   it('saves a change still waiting before another scenario replaces it', async () => {
@@ -95,7 +139,7 @@ describe('autosave', () => {
     await autosave.settled();
     const [record] = await store.list();
     expect(record.title).toBe(demo.title);
-    const kept = parseScenario(unpackScenario(await store.load(record.id)));
+    const kept = parseScenario(await store.load(record.id));
     expect(kept.display.quantity).toBe('B');
     // The newly opened scenario is other work: nothing of it saved yet, and no record of its own.
     expect(app.getState().workId).toBeNull();
