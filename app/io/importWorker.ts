@@ -1,19 +1,11 @@
 // Entry of the import worker: reads picked or dropped trajectory files off the page's thread.
-import {
-  answerImport,
-  type ImportReply,
-  type TrajectoryImportRequest,
-} from '../../src/io/importProtocol';
+import { type ImportCommand, type ImportReply, importServer } from '../../src/io/importProtocol';
 
 interface WorkerScope {
   postMessage(message: ImportReply, transfer: Transferable[]): void;
-  addEventListener(
-    type: 'message',
-    listener: (event: MessageEvent<TrajectoryImportRequest>) => void,
-  ): void;
+  addEventListener(type: 'message', listener: (event: MessageEvent<ImportCommand>) => void): void;
 }
 
 const scope = self as unknown as WorkerScope;
-scope.addEventListener('message', (event) => {
-  void answerImport(event.data).then(({ reply, transfer }) => scope.postMessage(reply, transfer));
-});
+const serve = importServer((reply, transfer) => scope.postMessage(reply, transfer));
+scope.addEventListener('message', (event) => serve(event.data));

@@ -10,10 +10,12 @@ import { sceneForPath } from '../scenario/pathScene';
 import { observationSpan, suggestedRate } from '../scenario/timeSpan';
 import { appStore } from '../store/appStore';
 import { selectSliceSpec } from '../store/sliceSpecOf';
-import { readTrajectoryFile } from './trajectoryReader';
+import { forgetTrajectoryFile, readTrajectoryFile } from './trajectoryReader';
 
 /** Largest trajectory file read, bytes: a million rows of ten columns at full precision. */
 const MAX_TRAJECTORY_BYTES = 512 * 1024 * 1024;
+
+let files = 0;
 
 /** Opens the import preview for a picked or dropped trajectory file and starts reading it. */
 export function startPathImport(file: File): void {
@@ -21,6 +23,7 @@ export function startPathImport(file: File): void {
   const units = previous?.units ?? { length: 'm', time: 's' };
   appStore.getState().setPathImport({
     file,
+    fileId: ++files,
     name: file.name,
     units,
     status: 'reading',
@@ -48,7 +51,7 @@ export function changeImportUnits(units: TrajectoryUnits): void {
 async function read(units: TrajectoryUnits): Promise<void> {
   const current = appStore.getState().pathImport;
   if (current === null) return;
-  const reading = await readTrajectoryFile(current.file, current.name, units);
+  const reading = await readTrajectoryFile(current.file, current.fileId, current.name, units);
   const now = appStore.getState().pathImport;
   if (reading.kind === 'superseded' || now === null || now.file !== current.file) return;
   if (reading.kind === 'failed') {
@@ -67,27 +70,17 @@ export function takeImportedPath(mode: 'replace' | 'add'): string | null {
   const pending = state.pathImport;
   if (pending?.result == null || state.scenario === null) return 'nothing to import';
   const { summary, path: built } = pending.result;
+  // The worker's columns go into the document as they are: no million-element copies.
   const path: ScenarioSamplesPath = {
     kind: 'samples',
-    t: Array.from(built.t),
-    x: Array.from(built.x),
-    y: Array.from(built.y),
-    z: Array.from(built.z),
+    t: built.t,
+    x: built.x,
+    y: built.y,
+    z: built.z,
   };
-  if (summary.velocity !== 'none') {
-    Object.assign(path, {
-      vx: Array.from(built.vx),
-      vy: Array.from(built.vy),
-      vz: Array.from(built.vz),
-    });
-  }
-  if (summary.accelerations) {
-    Object.assign(path, {
-      ax: Array.from(built.ax),
-      ay: Array.from(built.ay),
-      az: Array.from(built.az),
-    });
-  }
+  if (summary.velocity !== 'none')
+    Object.assign(path, { vx: built.vx, vy: built.vy, vz: built.vz });
+  if (summary.accelerations) Object.assign(path, { ax: built.ax, ay: built.ay, az: built.az });
   // The worker built the path already: the store takes it as it is instead of again.
   rememberBuiltPath(path, SampledPath.restore(built));
   const charges = state.scenario.charges;
@@ -108,6 +101,12 @@ export function takeImportedPath(mode: 'replace' | 'add'): string | null {
     const span = observationSpan(appStore.getState().charges, selectSliceSpec(appStore.getState()));
     if (span !== null) state.setRate(suggestedRate(span));
   }
-  state.setPathImport(null);
+  closePathImport();
   return null;
+}
+
+/** Closes the preview; the worker lets go of the file it kept for other units. */
+export function closePathImport(): void {
+  appStore.getState().setPathImport(null);
+  forgetTrajectoryFile();
 }

@@ -1,5 +1,6 @@
 import {
   answerImport,
+  forgetImportedFile,
   IMPORT_COMMANDS,
   IMPORT_REPLIES,
   type ImportReply,
@@ -19,17 +20,19 @@ const waiting = new Map<number, (reply: ImportReply | string) => void>();
 
 /**
  * Reads and checks a trajectory file in the import worker (on this thread where workers are
- * missing). Only the latest read counts: an older one resolves 'superseded'. A worker that
+ * missing). The worker keeps the table of the last `fileId` it read, so other units for the
+ * same file are tried without reading it again. Only the latest read counts: an older one resolves 'superseded'. A worker that
  * dies is dropped, its read fails with the reason, and the next read starts a new one.
  */
 export async function readTrajectoryFile(
   file: Blob,
+  fileId: number,
   name: string,
   units: TrajectoryUnits,
 ): Promise<TrajectoryReading> {
   const id = ++latest;
   for (const [older, settle] of waiting) if (older < id) settle('superseded');
-  const request = { type: IMPORT_COMMANDS.trajectory, id, file, name, units };
+  const request = { type: IMPORT_COMMANDS.trajectory, id, fileId, file, name, units };
   const port = importWorker();
   let reply: ImportReply | string;
   if (port === null) {
@@ -47,6 +50,12 @@ export async function readTrajectoryFile(
   if (typeof reply === 'string') return { kind: 'failed', message: reply, line: 0, columns: [] };
   if (reply.type === IMPORT_REPLIES.imported) return { kind: 'imported', result: reply.result };
   return { kind: 'failed', message: reply.message, line: reply.line, columns: reply.columns };
+}
+
+/** Lets the worker drop the table it keeps of the last file (the preview has closed). */
+export function forgetTrajectoryFile(): void {
+  if (worker !== null) worker.postMessage({ type: IMPORT_COMMANDS.forget });
+  else forgetImportedFile();
 }
 
 function importWorker(): Worker | null {

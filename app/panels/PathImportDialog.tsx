@@ -9,7 +9,7 @@ import {
 } from '../../src/io/trajectoryUnits';
 import { formatSI } from '../format/siFormat';
 import { useAppState } from '../hooks/useAppState';
-import { changeImportUnits, takeImportedPath } from '../io/pathImport';
+import { changeImportUnits, closePathImport, takeImportedPath } from '../io/pathImport';
 import { appStore } from '../store/appStore';
 
 /** The symbols offered (the ASCII spellings 'um' and 'us' are for the command line). */
@@ -26,7 +26,7 @@ export function PathImportDialog() {
     if (open) first.current?.focus();
   }, [open]);
   if (pending === null) return null;
-  const close = () => appStore.getState().setPathImport(null);
+  const close = closePathImport;
   const take = (mode: 'replace' | 'add') => {
     const problem = takeImportedPath(mode);
     if (problem !== null)

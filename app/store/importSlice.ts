@@ -5,6 +5,8 @@ import type { SliceCreator } from './appState';
 /** A trajectory file being looked at before it becomes a charge's path. */
 export interface PathImport {
   file: Blob;
+  /** Tells the import worker this is the file it read before (for a change of units). */
+  fileId: number;
   name: string;
   units: TrajectoryUnits;
   status: 'reading' | 'ready' | 'failed';

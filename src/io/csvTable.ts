@@ -39,6 +39,12 @@ export class CsvTable {
   optionalColumn(name: string): Float64Array | undefined {
     return this.data.get(name);
   }
+
+  /** A copy whose columns may be changed (scaled to SI, say) without touching this one. */
+  copy(): CsvTable {
+    const data = new Map([...this.data].map(([name, values]) => [name, values.slice()]));
+    return new CsvTable(this.file, this.names, data, this.lines, this.headerLine);
+  }
 }
 
 const RETURN = 13;

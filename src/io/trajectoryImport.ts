@@ -3,7 +3,7 @@ import { MAX_PATH_SAMPLES } from '../path/pathLimits';
 import { pathToTransfer } from '../path/pathTransfer';
 import { buildTrajectory, TRAJECTORY_SCHEMA, trajectoryColumns } from '../path/trajectoryCsv';
 import { SPEED_OF_LIGHT } from '../physics/constants';
-import { parseCsvTable } from './csvTable';
+import { type CsvTable, parseCsvTable } from './csvTable';
 import { InputError } from './inputError';
 import type { TrajectoryUnits } from './trajectoryUnits';
 
@@ -55,6 +55,11 @@ export function importTrajectory(
   file: string,
   units: TrajectoryUnits,
 ): ImportedTrajectory {
+  return trajectoryFromTable(readTrajectoryTable(text, file), units);
+}
+
+/** The table of trajectory CSV text, checked for its columns and its length, as written. */
+export function readTrajectoryTable(text: string, file: string): CsvTable {
   const table = parseCsvTable(text, file, TRAJECTORY_SCHEMA);
   if (table.rowCount > MAX_PATH_SAMPLES) {
     throw InputError.at(
@@ -64,10 +69,19 @@ export function importTrajectory(
       `more than ${MAX_PATH_SAMPLES} samples, the most a path may hold; thin the file out`,
     );
   }
+  return table;
+}
+
+/**
+ * The path a trajectory table describes in the given units, with its summary. The table is
+ * left as it was, so another choice of units can be tried on it without reading the file again.
+ */
+export function trajectoryFromTable(written: CsvTable, units: TrajectoryUnits): ImportedTrajectory {
   const firstRows: number[][] = [];
-  for (let r = 0; r < Math.min(PREVIEW_ROWS, table.rowCount); r++) {
-    firstRows.push(table.names.map((name) => table.column(name)[r]));
+  for (let r = 0; r < Math.min(PREVIEW_ROWS, written.rowCount); r++) {
+    firstRows.push(written.names.map((name) => written.column(name)[r]));
   }
+  const table = written.copy();
   const columns = trajectoryColumns(table, units);
   const built = buildTrajectory(table, columns);
   const path = pathToTransfer(built);

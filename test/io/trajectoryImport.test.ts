@@ -1,7 +1,14 @@
-import { describe, expect, it } from 'vitest';
-import { answerImport, IMPORT_COMMANDS } from '../../src/io/importProtocol';
+import { describe, expect, it, vi } from 'vitest';
+import {
+  answerImport,
+  forgetImportedFile,
+  IMPORT_COMMANDS,
+  type ImportReply,
+  importServer,
+} from '../../src/io/importProtocol';
 import { InputError } from '../../src/io/inputError';
 import { importTrajectory } from '../../src/io/trajectoryImport';
+import { SI_UNITS, type TrajectoryUnits } from '../../src/io/trajectoryUnits';
 import { SPEED_OF_LIGHT as c } from '../../src/physics/constants';
 
 /** Invented: uniform motion at 0.6 c along x, written in mm and ns with velocities in mm/ns. */
@@ -65,12 +72,14 @@ describe('importTrajectory', () => {
 });
 
 describe('answerImport, the import worker body', () => {
-  const request = (text: string) => ({
+  let files = 0;
+  const request = (text: string, fileId = ++files, units: TrajectoryUnits = SI_UNITS) => ({
     type: IMPORT_COMMANDS.trajectory,
     id: 7,
+    fileId,
     file: new Blob([text]),
     name: 'beam.csv',
-    units: { length: 'm' as const, time: 's' as const },
+    units,
   });
 
   it('answers a good file with the path, its columns handed over as transferables', async () => {
@@ -79,6 +88,27 @@ describe('answerImport, the import worker body', () => {
     expect(reply.id).toBe(7);
     expect(transfer).toHaveLength(10);
     expect(transfer.every((buffer) => buffer instanceof ArrayBuffer)).toBe(true);
+  });
+
+  it('tries other units on the table it read, without reading the file again', async () => {
+    const fileId = ++files;
+    const first = request(uniformText(11), fileId, { length: 'mm', time: 'ns' });
+    const inMmNs = await answerImport(first);
+    // The same file named by its id: its Blob is not read again (this one is empty).
+    const again = { ...request('', fileId, { length: 'm', time: 's' }) };
+    const text = vi.spyOn(again.file, 'text');
+    const inSi = await answerImport(again);
+    expect(text).not.toHaveBeenCalled();
+    // The rows came from the table kept: 0 to 0.1 ns read in ns, 0 to 0.1 s read in s.
+    const span = (answer: typeof inSi) =>
+      answer.reply.type === 'imported' ? answer.reply.result.summary.timeSpan[1] : Number.NaN;
+    expect(span(inMmNs)).toBeCloseTo(1e-10, 22);
+    expect(span(inSi)).toBeCloseTo(0.1, 12);
+    forgetImportedFile();
+    const afterForget = await answerImport({ ...request('', fileId, SI_UNITS) });
+    expect(afterForget.reply.type === 'import-failed' && afterForget.reply.message).toContain(
+      'empty file',
+    );
   });
 
   it('answers a broken file with its line and column', async () => {
@@ -90,5 +120,24 @@ describe('answerImport, the import worker body', () => {
       line: 3,
       columns: ['y'],
     });
+  });
+});
+
+describe('the import worker loop', () => {
+  it('reads a file once for quick changes of units and answers only the newest request', async () => {
+    const replies: ImportReply[] = [];
+    const serve = importServer((reply) => replies.push(reply));
+    const file = new Blob([uniformText(21)]);
+    const text = vi.spyOn(file, 'text');
+    const ask = (id: number, units: TrajectoryUnits) =>
+      serve({ type: IMPORT_COMMANDS.trajectory, id, fileId: 900, file, name: 'u.csv', units });
+    ask(1, SI_UNITS);
+    ask(2, { length: 'mm', time: 's' });
+    ask(3, { length: 'mm', time: 'ns' });
+    serve({ type: IMPORT_COMMANDS.forget });
+    await vi.waitFor(() => expect(replies.map((reply) => reply.id)).toContain(3));
+    // Asked before any had started: the two overtaken ones were skipped while they waited.
+    expect(replies.map((reply) => reply.id)).toEqual([3]);
+    expect(text).toHaveBeenCalledTimes(1);
   });
 });
