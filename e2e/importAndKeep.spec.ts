@@ -144,6 +144,11 @@ test('work survives a reload: restored with an offer to discard it', async ({ pa
   await expect(page.getByLabel('Shows')).toHaveValue('B');
   await snapshot(page, '24-restored-work');
 
+  // Discarding asks first: the work cannot be brought back.
+  page.once('dialog', (dialog) => {
+    expect(dialog.message()).toContain('cannot be brought back');
+    void dialog.accept();
+  });
   await page.getByRole('button', { name: 'Discard it and open the demo' }).click();
   await expect(page.getByTestId('restored-work')).toHaveCount(0);
   await expect(page.getByRole('button', { name: 'Probe P1', exact: true })).toHaveCount(0);

@@ -1,4 +1,5 @@
 import { appStore } from '../store/appStore';
+import { mayReplaceOpenWork } from './work';
 
 /** Largest scenario file read, bytes: a million samples with velocities is about 200 MB of JSON. */
 const MAX_SCENARIO_BYTES = 256 * 1024 * 1024;
@@ -8,6 +9,7 @@ const MAX_SCENARIO_BYTES = 256 * 1024 * 1024;
  * the field at fault, and the scenario already open stays open.
  */
 export async function openScenarioFile(file: File): Promise<void> {
+  if (!mayReplaceOpenWork()) return;
   const { beginScenarioLoad, applyScenarioText, failScenarioLoad, scenario } = appStore.getState();
   if (file.size > MAX_SCENARIO_BYTES) {
     failScenarioLoad(

@@ -32,7 +32,7 @@ function isReference(value: unknown): value is ColumnReference {
  */
 export class WorkStore {
   private readonly store: UseStore;
-  /** Per piece of work, the columns already kept and their keys. */
+  /** For the work last saved or read, the columns already kept and their keys. */
   private readonly kept = new Map<string, Map<Float64Array, string>>();
   private nextColumn = 0;
 
@@ -51,27 +51,40 @@ export class WorkStore {
 
   /** The document saved for `id`, as stored (check it before use), or undefined. */
   async load(id: string): Promise<unknown> {
-    const [document] = await getMany([DOCUMENT + id], this.store);
-    if (document === undefined) return undefined;
-    const references: ColumnReference[] = [];
-    visitColumns(document, (value) => {
-      if (isReference(value)) references.push(value);
-      return value;
+    // Document and columns in one transaction, so no save can come between them.
+    const found = await this.store('readonly', async (objects) => {
+      const document: unknown = await promisifyRequest(objects.get(DOCUMENT + id));
+      const references: ColumnReference[] = [];
+      visitColumns(document, (value) => {
+        if (isReference(value)) references.push(value);
+        return value;
+      });
+      const columns = await Promise.all(
+        references.map(
+          (reference) => promisifyRequest(objects.get(reference.storedColumn)) as Promise<unknown>,
+        ),
+      );
+      return {
+        document,
+        columns: new Map(references.map((reference, k) => [reference, columns[k]])),
+      };
     });
-    const columns = await getMany<Float64Array>(
-      references.map((reference) => reference.storedColumn),
-      this.store,
-    );
-    const found = new Map(references.map((reference, k) => [reference, columns[k]]));
+    if (found.document === undefined) return undefined;
     const kept = new Map<Float64Array, string>();
-    const restored = visitColumns(document, (value) => {
-      const column = isReference(value) ? found.get(value) : undefined;
-      if (isReference(value) && column instanceof Float64Array)
-        kept.set(column, value.storedColumn);
-      return isReference(value) ? column : value;
+    const restored = visitColumns(found.document, (value) => {
+      if (!isReference(value)) return value;
+      const column = found.columns.get(value);
+      if (column instanceof Float64Array) kept.set(column, value.storedColumn);
+      return column;
     });
-    this.kept.set(id, kept);
+    this.keep(id, kept);
     return restored;
+  }
+
+  /** Remembers the columns kept for the open work only: others' would pin their memory. */
+  private keep(id: string, columns: Map<Float64Array, string>): void {
+    this.kept.clear();
+    this.kept.set(id, columns);
   }
 
   /**
@@ -106,7 +119,7 @@ export class WorkStore {
       }
       return promisifyRequest(objects.transaction);
     });
-    this.kept.set(record.id, after);
+    this.keep(record.id, after);
   }
 
   /** The keys of the long columns kept for a piece of work. */

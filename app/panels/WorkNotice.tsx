@@ -7,6 +7,14 @@ function when(record: WorkRecord): string {
   return new Date(record.savedAt).toLocaleString();
 }
 
+/** Discards a piece of work once the user has said yes: it cannot be brought back. */
+function askToDiscard(record: WorkRecord): void {
+  const sure = window.confirm(
+    `Discard “${record.title}”, autosaved ${when(record)}? It cannot be brought back.`,
+  );
+  if (sure) void discardWork(record);
+}
+
 /**
  * What the browser keeps of the user's work: the work restored on opening (with an offer to
  * discard it), other autosaved work to open or discard, and any problem keeping it.
@@ -51,7 +59,7 @@ export function WorkNotice() {
           <button
             type="button"
             className="link-button notice-action"
-            onClick={() => void discardWork(restored)}
+            onClick={() => askToDiscard(restored)}
           >
             Discard it and open the demo
           </button>
@@ -77,7 +85,7 @@ export function WorkNotice() {
                 <button
                   type="button"
                   className="link-button notice-action"
-                  onClick={() => void discardWork(record)}
+                  onClick={() => askToDiscard(record)}
                 >
                   Discard
                 </button>

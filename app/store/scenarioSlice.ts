@@ -86,6 +86,7 @@ export const createScenarioSlice: SliceCreator<ScenarioSlice> = (set, get) => ({
       // Another document is other work: its changes are autosaved under a record of their own.
       workId: null,
       autosavedAt: null,
+      unkeptWork: false,
     });
     get().clearHistory();
     get().replaceProbes(scenario.probes);

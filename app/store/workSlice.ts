@@ -9,6 +9,8 @@ export interface WorkSlice {
   autosavedAt: number | null;
   /** Why autosave could not keep the work, in one line. */
   autosaveProblem: string | null;
+  /** The open work has changes the browser could not keep: ask before replacing it. */
+  unkeptWork: boolean;
   /** The record restored when the page opened, while its notice is shown. */
   restoredWork: WorkRecord | null;
   /** Other autosaved work, newest first, offered to open or discard. */
@@ -22,6 +24,7 @@ export const createWorkSlice: SliceCreator<WorkSlice> = (set) => ({
   workId: null,
   autosavedAt: null,
   autosaveProblem: null,
+  unkeptWork: false,
   restoredWork: null,
   otherWork: [],
   linkProblem: null,

@@ -147,6 +147,54 @@ describe('autosave', () => {
     expect(await store.list()).toHaveLength(1);
   });
 
+  it('keeps nothing for looking around, but keeps the view with work already kept', async () => {
+    const app = createAppStore();
+    const store = freshStore();
+    const autosave = startAutosave(app, store);
+    app.getState().applyScenarioText(demoText, 'demo.json');
+    await Promise.resolve();
+    app.getState().panBy(0.01, 0);
+    app.getState().setTime(1.2e-9);
+    await autosave.settled();
+    await new Promise((resolve) => setTimeout(resolve, 1000));
+    expect(await store.list()).toEqual([]);
+
+    app.getState().setDisplay({ scale: 'linear' });
+    await autosave.stop();
+    const restart = startAutosave(app, store);
+    app.getState().setTime(1.4e-9);
+    await restart.stop();
+    const kept = parseScenario(await store.load(app.getState().workId!));
+    expect(kept.display.scale).toBe('linear');
+    expect(kept.view.time).toBe(1.4e-9);
+  });
+
+  it('tries a failed save again before other work replaces it, and says meanwhile it is not kept', async () => {
+    const app = createAppStore();
+    const store = freshStore();
+    const save = store.save.bind(store);
+    let fail = true;
+    store.save = (record, document) =>
+      fail ? Promise.reject(new Error('QuotaExceededError')) : save(record, document);
+    const autosave = startAutosave(app, store);
+    app.getState().applyScenarioText(demoText, 'demo.json');
+    await Promise.resolve();
+    app.getState().addProbe([0.01, 0, 0]);
+    await new Promise((resolve) => setTimeout(resolve, 1000));
+    await autosave.settled();
+    expect(app.getState().unkeptWork).toBe(true);
+    expect(await store.list()).toEqual([]);
+
+    // Room again; the user opens other work without changing anything more.
+    fail = false;
+    app.getState().openScenarioDocument({ ...demo, title: 'Invented: next scene' }, 'b.json');
+    await autosave.settled();
+    const [record] = await store.list();
+    expect(record.title).toBe(demo.title);
+    expect(parseScenario(await store.load(record.id)).probes).toHaveLength(1);
+    await autosave.stop();
+  });
+
   it('says so when the browser will not keep the work', async () => {
     const app = createAppStore();
     const failing = freshStore();
