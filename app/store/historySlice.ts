@@ -14,6 +14,25 @@ export interface DocumentSnapshot {
 
 /** Edits remembered; older ones are forgotten first. */
 export const HISTORY_LIMIT = 200;
+/**
+ * Path samples undo may hold in all (80 bytes each, so about 400 MB), counting each built path
+ * once however many steps share it: a run of edits to a million-sample formula path forgets its
+ * oldest steps instead of filling the memory.
+ */
+export const HISTORY_SAMPLES = 5_000_000;
+
+/** The steps kept: at most HISTORY_LIMIT, fewer where their distinct paths hold too many samples. */
+function bounded(past: readonly DocumentSnapshot[]): readonly DocumentSnapshot[] {
+  let kept = past.slice(-HISTORY_LIMIT);
+  const samplesOf = (steps: readonly DocumentSnapshot[]) => {
+    const paths = new Set(steps.flatMap((step) => step.charges.map((charge) => charge.path)));
+    let total = 0;
+    for (const path of paths) total += path.count;
+    return total;
+  };
+  while (kept.length > 1 && samplesOf(kept) > HISTORY_SAMPLES) kept = kept.slice(1);
+  return kept;
+}
 
 export interface HistorySlice {
   past: readonly DocumentSnapshot[];
@@ -43,7 +62,7 @@ export const createHistorySlice: SliceCreator<HistorySlice> = (set, get) => {
     future: [],
     record: (label) =>
       set((state) => ({
-        past: [...state.past, snapshot(label)].slice(-HISTORY_LIMIT),
+        past: bounded([...state.past, snapshot(label)]),
         future: [],
       })),
     undo: () => {

@@ -10,7 +10,7 @@ import {
   undulatorWiggle,
   uniformMotion,
 } from '../path/presets';
-import { PathError, SampledPath } from '../path/sampledPath';
+import { PATH_COLUMNS, PathError, SampledPath } from '../path/sampledPath';
 import { SketchError, sketchColumns } from '../path/sketchPath';
 import type { ScenarioPath } from './scenario';
 import { fieldPath, ScenarioError } from './scenarioError';
@@ -25,10 +25,9 @@ import { type presetPathSchema, type SampleColumn, sketchIssuePath } from './sce
  */
 const bySamples = new WeakMap<SampleColumn, { columns: unknown[]; sampled: SampledPath }>();
 const byText = new Map<string, SampledPath>();
-/** Paths remembered by text; the least recently used goes first. */
-const TEXT_CACHE_SIZE = 16;
-
-const COLUMN_NAMES = ['t', 'x', 'y', 'z', 'vx', 'vy', 'vz', 'ax', 'ay', 'az'] as const;
+/** Samples the paths remembered by text may hold in all (80 bytes each); the least recently used go first. */
+const TEXT_CACHE_SAMPLES = 2_000_000;
+let textCacheSamples = 0;
 
 /** The sampled path of one scenario path; `where` names it in errors (`charges[0].path`). */
 export function buildPath(path: ScenarioPath, where: string): SampledPath {
@@ -42,19 +41,30 @@ export function buildPath(path: ScenarioPath, where: string): SampledPath {
 /** Lets a path built elsewhere (an import worker) stand for its document content. */
 export function rememberBuiltPath(path: ScenarioPath, sampled: SampledPath): void {
   if (path.kind === 'samples') {
-    bySamples.set(path.t, { columns: COLUMN_NAMES.map((name) => path[name]), sampled });
+    bySamples.set(path.t, { columns: PATH_COLUMNS.map((name) => path[name]), sampled });
     return;
   }
   const key = JSON.stringify(path);
-  byText.delete(key);
+  forgetText(key);
   byText.set(key, sampled);
-  if (byText.size > TEXT_CACHE_SIZE) byText.delete(byText.keys().next().value as string);
+  textCacheSamples += sampled.count;
+  // Keep at least the newest path, however long.
+  while (textCacheSamples > TEXT_CACHE_SAMPLES && byText.size > 1) {
+    forgetText(byText.keys().next().value as string);
+  }
+}
+
+function forgetText(key: string): void {
+  const known = byText.get(key);
+  if (known === undefined) return;
+  textCacheSamples -= known.count;
+  byText.delete(key);
 }
 
 function findBuilt(path: ScenarioPath): SampledPath | undefined {
   if (path.kind === 'samples') {
     const entry = bySamples.get(path.t);
-    const same = entry?.columns.every((column, k) => column === path[COLUMN_NAMES[k]]);
+    const same = entry?.columns.every((column, k) => column === path[PATH_COLUMNS[k]]);
     return same ? entry?.sampled : undefined;
   }
   const key = JSON.stringify(path);

@@ -22,6 +22,8 @@ export const SCENARIO_VERSION = 2;
 export { MAX_PATH_SAMPLES };
 
 const MAX_GRID_SIDE = 8192;
+/** Most samples all paths of a scenario may hold together (80 bytes each, several copies). */
+export const MAX_SCENARIO_SAMPLES = 4_000_000;
 /** Most probes a scenario may hold. */
 export const MAX_PROBES = 1000;
 
@@ -312,6 +314,14 @@ export const scenarioSchema = z
     display: mapSettingsSchema.default(defaultMapSettings),
   })
   .superRefine((scenario, ctx) => {
+    const total = scenario.charges.reduce((sum, { path }) => sum + pathSamples(path), 0);
+    if (total > MAX_SCENARIO_SAMPLES) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['charges'],
+        message: `the paths hold ${total} samples in all, more than the ${MAX_SCENARIO_SAMPLES} a scenario may hold`,
+      });
+    }
     scenario.charges.forEach(({ path }, k) => {
       if (path.kind === 'preset' && !(path.to > path.from)) {
         ctx.addIssue({
@@ -322,6 +332,11 @@ export const scenarioSchema = z
       }
     });
   });
+
+/** Samples a path will have once built. */
+function pathSamples(path: z.infer<typeof pathSchema>): number {
+  return path.kind === 'samples' ? path.t.length : path.samples;
+}
 
 /** Where in a sketch path a SketchError points: speed.beta, controls[3], samples, ... */
 export function sketchIssuePath(error: SketchError): (string | number)[] {

@@ -118,6 +118,20 @@ describe('formatScenario', () => {
   });
 });
 
+describe('the samples of a whole scenario', () => {
+  it('are at most four million, named on the charges', () => {
+    const doc = versionOne();
+    const charge = (doc.charges as Record<string, unknown>[])[0];
+    const heavy = { ...charge, path: { ...(charge.path as object), samples: 1_000_000 } };
+    doc.charges = [heavy, heavy, heavy, heavy];
+    expect(parseScenario(doc).charges).toHaveLength(4);
+    doc.charges = [heavy, heavy, heavy, heavy, { ...heavy, path: { ...heavy.path, samples: 2 } }];
+    expect(() => parseScenario(doc)).toThrow(
+      'charges: the paths hold 4000002 samples in all, more than the 4000000 a scenario may hold',
+    );
+  });
+});
+
 describe('a samples path column', () => {
   const withColumn = (x: unknown) => {
     const doc = versionOne();
