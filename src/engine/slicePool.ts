@@ -1,4 +1,5 @@
 import { pathToSharedTransfer, pathToTransfer, transferBuffers } from '../path/pathTransfer';
+import type { SampledPath } from '../path/sampledPath';
 import type { Charge } from '../physics/charge';
 import { defaultNearRadius } from './computeSlice';
 import { computeSliceRows, type KernelStats } from './sliceKernel';
@@ -6,6 +7,7 @@ import { allocateSliceFields, PLANE_COUNT, type SliceFields } from './slicePlane
 import type { SliceSpec } from './sliceSpec';
 import {
   COMMANDS,
+  type PathTransfer,
   REPLIES,
   type SceneCommand,
   type WorkerPort,
@@ -84,6 +86,8 @@ export class SlicePool {
   private charges: readonly Charge[] = [];
   /** The scene in shared memory, made once per scene and read by every worker. */
   private sharedScene: SceneCommand['charges'] | null = null;
+  /** The paths of the last shared scene: a new scene that keeps a path does not copy it again. */
+  private sharedPaths = new Map<SampledPath, PathTransfer>();
   private sceneId = 0;
   private nextId = 1;
   private phase: Phase | null = null;
@@ -369,10 +373,16 @@ export class SlicePool {
 
   private postScene(port: WorkerPort): void {
     if (typeof SharedArrayBuffer === 'function') {
-      this.sharedScene ??= this.charges.map((c) => ({
-        charge: c.charge,
-        path: pathToSharedTransfer(c.path),
-      }));
+      if (this.sharedScene === null) {
+        const before = this.sharedPaths;
+        this.sharedPaths = new Map(
+          this.charges.map((c) => [c.path, before.get(c.path) ?? pathToSharedTransfer(c.path)]),
+        );
+        this.sharedScene = this.charges.map((c) => ({
+          charge: c.charge,
+          path: this.sharedPaths.get(c.path)!,
+        }));
+      }
       port.post({ type: COMMANDS.scene, sceneId: this.sceneId, charges: this.sharedScene }, []);
       return;
     }

@@ -1,5 +1,5 @@
 import type { PathTransfer } from '../engine/workerProtocol';
-import { SampledPath } from './sampledPath';
+import { PATH_COLUMNS, SampledPath } from './sampledPath';
 
 /** Copies of a path's columns for posting to a worker (the path keeps its own). */
 export function pathToTransfer(path: SampledPath): PathTransfer {
@@ -18,18 +18,16 @@ export function pathToTransfer(path: SampledPath): PathTransfer {
   };
 }
 
-const COLUMNS = ['t', 'x', 'y', 'z', 'vx', 'vy', 'vz', 'ax', 'ay', 'az'] as const;
-
 /**
  * The path's columns copied once into shared memory, which every worker can read without a
- * copy of its own: a million-sample scene is 80 MB. Needs SharedArrayBuffer (a cross-origin
+ * copy of its own: a million-sample scene is 80 MB. Nothing may write to them afterwards. Needs SharedArrayBuffer (a cross-origin
  * isolated page, or Node).
  */
 export function pathToSharedTransfer(path: SampledPath): PathTransfer {
   const n = path.count;
-  const memory = new SharedArrayBuffer(COLUMNS.length * n * Float64Array.BYTES_PER_ELEMENT);
-  const columns = {} as Record<(typeof COLUMNS)[number], Float64Array>;
-  COLUMNS.forEach((name, k) => {
+  const memory = new SharedArrayBuffer(PATH_COLUMNS.length * n * Float64Array.BYTES_PER_ELEMENT);
+  const columns = {} as Record<(typeof PATH_COLUMNS)[number], Float64Array>;
+  PATH_COLUMNS.forEach((name, k) => {
     const view = new Float64Array(memory, k * n * Float64Array.BYTES_PER_ELEMENT, n);
     view.set(path[name]);
     columns[name] = view;

@@ -16,6 +16,9 @@ export interface PathColumns {
   az?: ArrayLike<number>;
 }
 
+/** Every column a path has, in order: time, position, velocity, acceleration. */
+export const PATH_COLUMNS = ['t', 'x', 'y', 'z', 'vx', 'vy', 'vz', 'ax', 'ay', 'az'] as const;
+
 /** A path that cannot be used, with the sample (0-based) and column it concerns. */
 export class PathError extends Error {
   constructor(

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { computeSlice } from '../../src/engine/computeSlice';
 import { SlicePool } from '../../src/engine/slicePool';
 import type { SliceSpec } from '../../src/engine/sliceSpec';
+import type { SceneCommand, WorkerPort } from '../../src/engine/workerProtocol';
 import { sampleMotion } from '../../src/path/analyticMotion';
 import { circularOrbit, lineOscillation } from '../../src/path/presets';
 import { SampledPath } from '../../src/path/sampledPath';
@@ -147,6 +148,30 @@ describe('the slice pool', () => {
     });
     expect(coarse).toEqual([10, 8]);
     expect(result!.fields.nx).toBe(40);
+    pool.dispose();
+  });
+
+  it('shares a scene with its workers through one block of memory, and keeps a path a new scene keeps', () => {
+    const scenes: SceneCommand[] = [];
+    const recording = (): WorkerPort => ({
+      post: (command) => {
+        // Each new worker is first given the empty scene; only real ones count here.
+        if (command.type === 'scene' && command.charges.length > 0) scenes.push(command);
+      },
+      onMessage: () => {},
+      onFailure: () => {},
+      terminate: () => {},
+    });
+    const pool = new SlicePool({ createPort: recording, size: 2 });
+    pool.setScene(charges);
+    // Both workers were given the same shared columns: one copy, not one per worker.
+    expect(scenes).toHaveLength(2);
+    expect(scenes[0].charges[0].path.t.buffer).toBeInstanceOf(SharedArrayBuffer);
+    expect(scenes[1].charges[0].path.t).toBe(scenes[0].charges[0].path.t);
+    // A new scene with the first charge changed in value but not in path copies nothing again.
+    pool.setScene([{ ...charges[0], charge: 2 * charges[0].charge }, charges[1]]);
+    expect(scenes[2].charges[0].path.t).toBe(scenes[0].charges[0].path.t);
+    expect(scenes[2].charges[1].path.t).toBe(scenes[0].charges[1].path.t);
     pool.dispose();
   });
 });
