@@ -12,8 +12,8 @@ import { appStore } from '../store/appStore';
 import { selectSliceSpec } from '../store/sliceSpecOf';
 import { forgetTrajectoryFile, readTrajectoryFile } from './trajectoryReader';
 
-/** Largest trajectory file read, bytes: a million rows of ten columns at full precision. */
-const MAX_TRAJECTORY_BYTES = 512 * 1024 * 1024;
+/** Largest trajectory file read, bytes: a million rows of ten columns at full precision, and below the longest string a browser makes (2²⁹ characters). */
+const MAX_TRAJECTORY_BYTES = 500 * 2 ** 20;
 
 let files = 0;
 
@@ -34,7 +34,7 @@ export function startPathImport(file: File): void {
   if (file.size > MAX_TRAJECTORY_BYTES) {
     appStore.getState().updatePathImport({
       status: 'failed',
-      error: `${file.name} is ${Math.round(file.size / 2 ** 20)} MB, more than the 512 MB this page reads`,
+      error: `${file.name} is ${Math.round(file.size / 2 ** 20)} MB, more than the 500 MB this page reads`,
     });
     return;
   }

@@ -160,10 +160,19 @@ function ImportSummary({ summary, units }: { summary: TrajectorySummary; units: 
     ],
     ['Fastest', `β = ${summary.maxBeta.toPrecision(10)}, γ = ${summary.maxGamma.toPrecision(6)}`],
   ];
+  // Velocities are held in m/s: near c their doubles resolve 1 − β only to about 2⁻⁵³.
+  const betaResolution = 1.1e-16 * 2 * summary.maxGamma * summary.maxGamma;
   const ratio = summary.positionsPerVelocity;
   const mismatch = ratio !== null && Math.abs(Math.log(ratio)) > Math.log(1.05);
   return (
     <div className="import-summary" data-testid="path-import-summary">
+      {betaResolution > 1e-4 && (
+        <p className="field-problem" role="alert">
+          γ reaches {summary.maxGamma.toPrecision(3)}: velocities in double precision resolve 1 − β
+          here only to {(100 * betaResolution).toPrecision(2)} %, so fields straight ahead of the
+          charge are that uncertain.
+        </p>
+      )}
       {mismatch && (
         <p className="field-problem" role="alert">
           The positions move {ratio.toPrecision(3)} times as far per step as the velocities say:

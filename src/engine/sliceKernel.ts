@@ -134,11 +134,11 @@ export function computeSliceRows(
         else if (!addLienardWiechert(charge, rx, ry, rz, state, sample)) onCharge = true;
       }
       if (!onCharge) {
-        // A point so near a charge that E, E_rad or S would overflow float32 is flagged too.
+        // A point so near a charge that E, E_rad, B or S would overflow float32 is flagged too.
         const e2 = sample.ex * sample.ex + sample.ey * sample.ey + sample.ez * sample.ez;
         const r2 = sample.erx * sample.erx + sample.ery * sample.ery + sample.erz * sample.erz;
         const b2 = sample.bx * sample.bx + sample.by * sample.by + sample.bz * sample.bz;
-        onCharge = !(e2 <= SAFE_E2 && r2 <= SAFE_E2 && e2 * b2 <= SAFE_EB2);
+        onCharge = !(e2 <= SAFE_E2 && r2 <= SAFE_E2 && b2 <= SAFE_E2 && e2 * b2 <= SAFE_EB2);
       }
       if (onCharge) {
         mask[p] = MASK_ON_CHARGE;

@@ -1,11 +1,7 @@
 import { transferBuffers } from '../path/pathTransfer';
 import type { CsvTable } from './csvTable';
 import { InputError } from './inputError';
-import {
-  type ImportedTrajectory,
-  readTrajectoryTable,
-  trajectoryFromTable,
-} from './trajectoryImport';
+import { type ImportedTrajectory, importFromTable, readTrajectoryTable } from './trajectoryImport';
 import type { TrajectoryUnits } from './trajectoryUnits';
 
 /** The messages between the page and its import worker, in one place. */
@@ -69,7 +65,7 @@ export async function answerImport(
       table = readTrajectoryTable(await request.file.text(), name);
       lastRead = { fileId: request.fileId, table };
     }
-    const result = trajectoryFromTable(table, request.units);
+    const result = importFromTable(table, request.units);
     return {
       reply: { type: IMPORT_REPLIES.imported, id, result },
       transfer: transferBuffers(result.path),
@@ -112,10 +108,25 @@ export function importServer(
       return;
     }
     newest = Math.max(newest, command.id);
-    queue = queue.then(async () => {
-      if (command.id < newest) return;
-      const { reply, transfer } = await answerImport(command);
-      post(reply, transfer);
-    });
+    queue = queue
+      .then(async () => {
+        if (command.id < newest) return;
+        const { reply, transfer } = await answerImport(command);
+        post(reply, transfer);
+      })
+      .catch((error: unknown) => {
+        // A reply that could not be sent must not stop the requests after it.
+        const reason = error instanceof Error ? error.message : String(error);
+        post(
+          {
+            type: IMPORT_REPLIES.failed,
+            id: command.id,
+            message: `${command.name}: could not be read (${reason})`,
+            line: 0,
+            columns: [],
+          },
+          [],
+        );
+      });
   };
 }

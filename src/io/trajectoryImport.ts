@@ -55,7 +55,7 @@ export function importTrajectory(
   file: string,
   units: TrajectoryUnits,
 ): ImportedTrajectory {
-  return trajectoryFromTable(readTrajectoryTable(text, file), units);
+  return importFromTable(readTrajectoryTable(text, file), units);
 }
 
 /** The table of trajectory CSV text, checked for its columns and its length, as written. */
@@ -76,7 +76,7 @@ export function readTrajectoryTable(text: string, file: string): CsvTable {
  * The path a trajectory table describes in the given units, with its summary. The table is
  * left as it was, so another choice of units can be tried on it without reading the file again.
  */
-export function trajectoryFromTable(written: CsvTable, units: TrajectoryUnits): ImportedTrajectory {
+export function importFromTable(written: CsvTable, units: TrajectoryUnits): ImportedTrajectory {
   const firstRows: number[][] = [];
   for (let r = 0; r < Math.min(PREVIEW_ROWS, written.rowCount); r++) {
     firstRows.push(written.names.map((name) => written.column(name)[r]));

@@ -103,8 +103,13 @@ function scaled(values: Float64Array, factor: number): Float64Array {
   return values;
 }
 
-/** v = c·βγ/√(1 + |βγ|²): below c for every finite βγ, and exact enough at γ = 10⁴. */
+/**
+ * v = c·βγ/√(1 + |βγ|²), below c in exact arithmetic. In doubles 1 − β is resolved only down
+ * to about 1e-16, so above γ ≈ 6.7e7 the velocity rounds to c: such a row is refused with that
+ * reason rather than as a charge faster than light (or, overflowing, as one at rest).
+ */
 function velocitiesFromMomentum(table: CsvTable): Pick<PathColumns, 'vx' | 'vy' | 'vz'> {
+  const c = SPEED_OF_LIGHT;
   const ux = table.column('bgx');
   const uy = table.column('bgy');
   const uz = table.column('bgz');
@@ -113,21 +118,23 @@ function velocitiesFromMomentum(table: CsvTable): Pick<PathColumns, 'vx' | 'vy' 
   const vy = new Float64Array(n);
   const vz = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    const squared = 1 + ux[i] * ux[i] + uy[i] * uy[i] + uz[i] * uz[i];
-    if (squared === Number.POSITIVE_INFINITY) {
-      // |βγ| past about 1e154 overflows when squared; v is then c along βγ to the last bit.
-      const size = Math.max(Math.abs(ux[i]), Math.abs(uy[i]), Math.abs(uz[i]));
-      const [sx, sy, sz] = [ux[i] / size, uy[i] / size, uz[i] / size];
-      const scale = SPEED_OF_LIGHT / Math.sqrt(sx * sx + sy * sy + sz * sz);
-      vx[i] = sx * scale;
-      vy[i] = sy * scale;
-      vz[i] = sz * scale;
-      continue;
-    }
-    const scale = SPEED_OF_LIGHT / Math.sqrt(squared);
+    const gammaSquared = 1 + ux[i] * ux[i] + uy[i] * uy[i] + uz[i] * uz[i];
+    const scale = c / Math.sqrt(gammaSquared);
     vx[i] = ux[i] * scale;
     vy[i] = uy[i] * scale;
     vz[i] = uz[i] * scale;
+    if (
+      !(gammaSquared < Number.POSITIVE_INFINITY) ||
+      !(vx[i] * vx[i] + vy[i] * vy[i] + vz[i] * vz[i] < c * c)
+    ) {
+      const gamma = Math.sqrt(gammaSquared);
+      throw InputError.at(
+        table.file,
+        table.lines[i],
+        [...MOMENTUM],
+        `γ = ${Number.isFinite(gamma) ? gamma.toPrecision(3) : 'beyond 1e154'} is too close to c for a velocity in double precision (it rounds to c above γ ≈ 6.7e7)`,
+      );
+    }
   }
   return { vx, vy, vz };
 }

@@ -149,14 +149,24 @@ describe('trajectory units and βγ columns', () => {
     expect(Math.abs((c - s.vx) / c / 5.0000000125e-9 - 1)).toBeLessThan(1e-7);
   });
 
-  it('refuses βγ too large to square in a double as the speed of light, not as rest', () => {
-    // |βγ|² overflows past about 1.3e154; v = cβγ/√(1 + |βγ|²) is then c to the last bit.
-    // Found by test/path/trajectoryCsv.property.test.ts, which read 1e200 as v = 0.
+  it('refuses βγ too large to square in a double as too close to c, not as rest', () => {
+    // |βγ|² overflows past about 1.3e154. Found by test/path/trajectoryCsv.property.test.ts,
+    // which read 1e200 as v = 0.
     for (const row of ['1e200,0,0', '-3e200,4e200,0', '1.7976931348623157e308,0,1']) {
       expect(trajectoryError(`t,x,y,z,bgx,bgy,bgz\n0,0,0,0,${row}\n1,1,0,0,1,0,0\n`).message).toBe(
-        'beam.csv line 2, columns "bgx", "bgy", "bgz": speed reaches 1.00000 c at sample 1 (counting from 1; t = 0 s); a charge must move slower than light',
+        'beam.csv line 2, columns "bgx", "bgy", "bgz": γ = beyond 1e154 is too close to c for a velocity in double precision (it rounds to c above γ ≈ 6.7e7)',
       );
     }
+  });
+
+  it('refuses a γ whose velocity rounds to c, and takes one just below', () => {
+    // 1 − β ≈ 1/(2γ²) meets the spacing of doubles near 1 (1.1e-16) at γ ≈ 6.7e7 (from the
+    // definition of γ; the spacing is IEEE 754 binary64's 2⁻⁵³).
+    expect(trajectoryError('t,x,y,z,bgx,bgy,bgz\n0,0,0,0,1e8,0,0\n').message).toBe(
+      'beam.csv line 2, columns "bgx", "bgy", "bgz": γ = 1.00e+8 is too close to c for a velocity in double precision (it rounds to c above γ ≈ 6.7e7)',
+    );
+    const path = parseTrajectory('t,x,y,z,bgx,bgy,bgz\n0,0,0,0,3e7,0,0\n', 'ok.csv');
+    expect(path.maxSpeed).toBeLessThan(SPEED_OF_LIGHT);
   });
 
   it('refuses velocities given twice, naming both groups', () => {
