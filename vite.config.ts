@@ -40,12 +40,15 @@ function contentSecurityPolicy(): Plugin {
   };
 }
 
+/** What a policy in a <meta> element cannot say: the built app may not be framed by other sites. */
+const previewHeaders = { ...isolation, 'Content-Security-Policy': "frame-ancestors 'none'" };
+
 export default defineConfig({
   root: 'app',
   publicDir: '../public',
   plugins: [react(), contentSecurityPolicy()],
   server: { headers: isolation },
-  preview: { headers: isolation },
+  preview: { headers: previewHeaders },
   build: { outDir: '../dist', emptyOutDir: true, target: 'es2022' },
   worker: { format: 'es' },
   test: {

@@ -19,16 +19,20 @@ if (report.statusCode !== undefined || report.error !== undefined) {
   );
   process.exit(3);
 }
+// Exceptions name advisories, not packages, so a new advisory is never covered by an old note:
+// { "<advisory url>": "why it does not apply here" }.
 const explained = existsSync('audit-exceptions.json')
   ? JSON.parse(readFileSync('audit-exceptions.json', 'utf8'))
   : {};
-const serious = Object.values(report.vulnerabilities ?? {}).filter(
-  (entry) => entry.severity === 'high' || entry.severity === 'critical',
-);
-const unexplained = serious.filter((entry) => !(entry.name in explained));
-for (const entry of serious) {
-  const why = explained[entry.name];
-  console.log(`${entry.severity} ${entry.name} ${entry.range}${why ? ` (explained: ${why})` : ''}`);
+const advisories = Object.values(report.vulnerabilities ?? {})
+  .flatMap((entry) => entry.via.filter((via) => typeof via === 'object'))
+  .filter((advisory) => advisory.severity === 'high' || advisory.severity === 'critical');
+const unexplained = advisories.filter((advisory) => !(advisory.url in explained));
+for (const advisory of advisories) {
+  const why = explained[advisory.url];
+  console.log(
+    `${advisory.severity} ${advisory.name} ${advisory.range}: ${advisory.title} ${advisory.url}${why ? ` (explained: ${why})` : ''}`,
+  );
 }
 const counts = report.metadata?.vulnerabilities ?? {};
 console.log(`audit: ${JSON.stringify(counts)}; ${unexplained.length} high or critical unexplained`);
