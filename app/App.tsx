@@ -9,6 +9,7 @@ import { AutosaveStatus } from './panels/AutosaveStatus';
 import { CAUTIONS_ID, Cautions } from './panels/Cautions';
 import { ChargesPanel } from './panels/ChargesPanel';
 import { ColourBar } from './panels/ColourBar';
+import { FilePicker } from './panels/fields/FilePicker';
 import { MapLegend } from './panels/MapLegend';
 import { MapPanel } from './panels/MapPanel';
 import { PathImportDialog } from './panels/PathImportDialog';
@@ -39,20 +40,13 @@ export function App() {
         <h1 className="app-name">Conecast</h1>
         <span className="app-tagline">retarded-time fields of moving point charges</span>
         <AutosaveStatus />
-        <label className="header-button header-plain header-first file-button">
-          Open scenario…
-          <input
-            type="file"
-            accept=".json,application/json"
-            className="visually-hidden"
-            data-testid="open-scenario"
-            onChange={(event) => {
-              const file = event.currentTarget.files?.[0];
-              if (file) void openScenarioFile(file);
-              event.currentTarget.value = '';
-            }}
-          />
-        </label>
+        <FilePicker
+          label="Open scenario…"
+          accept=".json,application/json"
+          testId="open-scenario"
+          className="header-button header-plain header-first"
+          onFile={(file) => void openScenarioFile(file)}
+        />
         <button
           type="button"
           className="header-button header-plain"

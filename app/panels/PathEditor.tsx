@@ -8,6 +8,7 @@ import { observationSpan, suggestedRate } from '../scenario/timeSpan';
 import { appStore } from '../store/appStore';
 import { selectSliceSpec } from '../store/sliceSpecOf';
 import { defaultExpressionPath, ExpressionEditor } from './ExpressionEditor';
+import { FilePicker } from './fields/FilePicker';
 import { PresetEditor } from './PresetEditor';
 import { SketchEditor } from './SketchEditor';
 
@@ -87,20 +88,13 @@ export function PathEditor({ index }: { index: number }) {
           {formatSI(path.t[path.t.length - 1], 's', 4)}, as imported.
         </p>
       )}
-      <label className="file-button link-button">
-        Import a path from CSV…
-        <input
-          type="file"
-          accept=".csv,.txt,.dat,text/csv,text/plain"
-          className="visually-hidden"
-          data-testid="import-path"
-          onChange={(event) => {
-            const file = event.currentTarget.files?.[0];
-            if (file) startPathImport(file);
-            event.currentTarget.value = '';
-          }}
-        />
-      </label>
+      <FilePicker
+        label="Import a path from CSV…"
+        accept=".csv,.txt,.dat,text/csv,text/plain"
+        testId="import-path"
+        className="link-button"
+        onFile={startPathImport}
+      />
     </div>
   );
 }
