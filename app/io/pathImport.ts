@@ -12,7 +12,10 @@ import { appStore } from '../store/appStore';
 import { selectSliceSpec } from '../store/sliceSpecOf';
 import { forgetTrajectoryFile, readTrajectoryFile } from './trajectoryReader';
 
-/** Largest trajectory file read, bytes: a million rows of ten columns at full precision, and below the longest string a browser makes (2²⁹ characters). */
+/**
+ * Largest trajectory file read, bytes: room for a million rows of ten columns at full
+ * precision, and below the longest string a browser makes (2²⁹ characters).
+ */
 const MAX_TRAJECTORY_BYTES = 500 * 2 ** 20;
 
 let files = 0;

@@ -21,8 +21,9 @@ const waiting = new Map<number, (reply: ImportReply | string) => void>();
 /**
  * Reads and checks a trajectory file in the import worker (on this thread where workers are
  * missing). The worker keeps the table of the last `fileId` it read, so other units for the
- * same file are tried without reading it again. Only the latest read counts: an older one resolves 'superseded'. A worker that
- * dies is dropped, its read fails with the reason, and the next read starts a new one.
+ * same file are tried without reading it again. Only the latest read counts: an older one
+ * resolves 'superseded'. A worker that dies is dropped, its read fails with the reason, and
+ * the next read starts a new one.
  */
 export async function readTrajectoryFile(
   file: Blob,
