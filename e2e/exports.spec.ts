@@ -126,7 +126,9 @@ test('a probe series saved as CSV equals conecast probe with the same window and
     1,
   );
   const rows = readFileSync(csv, 'utf8').trimEnd().split('\n');
-  expect(rows[0]).toBe('t,Ex,Ey,Ez,Bx,By,Bz,Sx,Sy,Sz');
+  expect(rows[0]).toBe(
+    't_s,Ex_V_per_m,Ey_V_per_m,Ez_V_per_m,Bx_T,By_T,Bz_T,Sx_W_per_m2,Sy_W_per_m2,Sz_W_per_m2',
+  );
   const first = Number(rows[1].split(',')[0]);
   const last = Number(rows[rows.length - 1].split(',')[0]);
   const scenario = await savedScenario(page);

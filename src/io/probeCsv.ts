@@ -1,8 +1,9 @@
 import type { ProbeSeries } from '../analysis/probeSeries';
 import type { Spectrum } from '../analysis/spectrum';
 
-/** Columns of a probe's time series: s, V/m, T, W/m². */
-export const PROBE_HEADER = 't,Ex,Ey,Ez,Bx,By,Bz,Sx,Sy,Sz';
+/** Columns of a probe's time series, units in the names: s, V/m, T, W/m². */
+export const PROBE_HEADER =
+  't_s,Ex_V_per_m,Ey_V_per_m,Ez_V_per_m,Bx_T,By_T,Bz_T,Sx_W_per_m2,Sy_W_per_m2,Sz_W_per_m2';
 /** Columns of a probe's spectrum, units in the names. */
 export const SPECTRUM_HEADER = 'f_Hz,energy_spectral_density_J_per_m2_Hz';
 

@@ -30,7 +30,9 @@ describe('conecast probe', () => {
     ]);
     expect(run.stderr).toBe('');
     const { header, rows } = outputRows(run.stdout);
-    expect(header).toBe('t,Ex,Ey,Ez,Bx,By,Bz,Sx,Sy,Sz');
+    expect(header).toBe(
+      't_s,Ex_V_per_m,Ey_V_per_m,Ez_V_per_m,Bx_T,By_T,Bz_T,Sx_W_per_m2,Sy_W_per_m2,Sz_W_per_m2',
+    );
     expect(rows).toHaveLength(11);
     expect(rows[0][0]).toBe(5e-10);
     // Both ends are included; the last time differs from 1e-9 by rounding of the step only.
