@@ -181,6 +181,21 @@ test('work survives a crash of the tab', async ({ page, context }) => {
   expect(errors).toEqual([]);
 });
 
+test('a number typed and then given its unit is applied in that unit, not lost', async ({
+  page,
+}) => {
+  const errors = collectErrors(page);
+  await openApp(page);
+  await page.getByRole('button', { name: 'Add a probe at the slice centre' }).click();
+  const details = page.getByTestId('probe-details');
+  await expect(details).toHaveAttribute('data-position', '0,0,0');
+  await page.getByLabel('Probe y', { exact: true }).fill('5');
+  await page.getByLabel('Unit of Probe y').selectOption('cm');
+  await expect(details).toHaveAttribute('data-position', '0,0.05,0');
+  await expect(page.getByLabel('Probe y', { exact: true })).toHaveValue('5');
+  expect(errors).toEqual([]);
+});
+
 test('a shared link opens the same scenario, view and time in a fresh browser', async ({
   page,
   browser,

@@ -1,4 +1,4 @@
-import { useEffect, useId, useState } from 'react';
+import { useEffect, useId, useRef, useState } from 'react';
 import { inUnit, PLAIN_NUMBER, type UnitChoice, unitFor } from '../../format/units';
 
 interface NumberFieldProps {
@@ -29,6 +29,9 @@ export function NumberField({
   const [unit, setUnit] = useState(() => unitFor(value, units));
   const [text, setText] = useState(() => inUnit(value, unit));
   const [problem, setProblem] = useState<string | null>(null);
+  /** Text typed and not yet applied: choosing a unit next applies it in that unit. */
+  const [dirty, setDirty] = useState(false);
+  const unitPicker = useRef<HTMLSelectElement>(null);
 
   // A value changed elsewhere (undo, another control) shows here unless the box holds a problem.
   useEffect(() => {
@@ -36,6 +39,7 @@ export function NumberField({
   }, [value, unit, problem]);
 
   const commit = (typed: string, inUnitOf: UnitChoice) => {
+    setDirty(false);
     const trimmed = typed.trim();
     const number = trimmed === '' ? Number.NaN : Number(trimmed);
     if (!Number.isFinite(number)) {
@@ -68,25 +72,39 @@ export function NumberField({
           data-testid={testId}
           aria-invalid={problem !== null}
           aria-describedby={problem ? `${id}-problem` : undefined}
-          onChange={(event) => setText(event.currentTarget.value)}
-          onBlur={() => commit(text, unit)}
+          onChange={(event) => {
+            setText(event.currentTarget.value);
+            setDirty(true);
+          }}
+          onBlur={(event) => {
+            // Typed "5", then off to pick "cm": the number waits for its unit.
+            if (event.relatedTarget !== null && event.relatedTarget === unitPicker.current) return;
+            commit(text, unit);
+          }}
           onKeyDown={(event) => {
             if (event.key === 'Enter') commit(text, unit);
             if (event.key === 'Escape') {
               setProblem(null);
+              setDirty(false);
               setText(inUnit(value, unit));
             }
           }}
         />
         {units.length > 1 ? (
           <select
+            ref={unitPicker}
             aria-label={`Unit of ${label}`}
             value={unit.symbol}
             onChange={(event) => {
               const next = units.find((choice) => choice.symbol === event.currentTarget.value);
               if (next === undefined) return;
               setUnit(next);
-              if (problem === null) setText(inUnit(value, next));
+              // A number typed just before is meant in the unit now chosen.
+              if (dirty) commit(text, next);
+              else if (problem === null) setText(inUnit(value, next));
+            }}
+            onBlur={() => {
+              if (dirty) commit(text, unit);
             }}
           >
             {units.map((choice) => (

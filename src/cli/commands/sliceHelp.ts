@@ -33,7 +33,7 @@ Options:
                   moved onto a custom plane along its normal)
   --size W,H      extent along u and v, m
   --res NX,NY     grid points along u and v (1 to 8192 each)
-  --out FILE      output file; .npy also writes FILE.json beside it (see below)
+  --out FILE      output file; .npy also writes FILE.npy.json beside it (see below)
   --quantity Q    what is written (default E):
 ${Object.entries(QUANTITIES)
   .map(([name, parts]) => `                    ${name.padEnd(5)} ${parts.join(', ')}`)
