@@ -1,5 +1,5 @@
 import { useEffect, useRef } from 'react';
-import type { TrajectorySummary } from '../../src/io/trajectoryImport';
+import { type TrajectorySummary, unitsMismatch } from '../../src/io/trajectoryImport';
 import {
   isLengthUnit,
   isTimeUnit,
@@ -162,8 +162,7 @@ function ImportSummary({ summary, units }: { summary: TrajectorySummary; units: 
   ];
   // Velocities are held in m/s: near c their doubles resolve 1 − β only to about 2⁻⁵³.
   const betaResolution = 1.1e-16 * 2 * summary.maxGamma * summary.maxGamma;
-  const ratio = summary.positionsPerVelocity;
-  const mismatch = ratio !== null && Math.abs(Math.log(ratio)) > Math.log(1.05);
+  const mismatch = unitsMismatch(summary);
   return (
     <div className="import-summary" data-testid="path-import-summary">
       {betaResolution > 1e-4 && (
@@ -175,8 +174,7 @@ function ImportSummary({ summary, units }: { summary: TrajectorySummary; units: 
       )}
       {mismatch && (
         <p className="field-problem" role="alert">
-          The positions move {ratio.toPrecision(3)} times as far per step as the velocities say:
-          check the units of lengths, times and velocities.
+          Check the units: {mismatch}.
         </p>
       )}
       <dl className="summary-list">

@@ -1,6 +1,7 @@
 import { InputError } from '../io/inputError';
 import { readTextFile } from '../io/readTextFile';
 import { buildCharges, parseScenarioText, type Scenario, ScenarioError } from '../io/scenario';
+import { importTrajectory, unitsMismatch } from '../io/trajectoryImport';
 import {
   isLengthUnit,
   isTimeUnit,
@@ -8,9 +9,10 @@ import {
   TIME_UNITS,
   type TrajectoryUnits,
 } from '../io/trajectoryUnits';
-import { readTrajectory } from '../path/readTrajectory';
+import { pathFromTransfer } from '../path/pathTransfer';
 import type { Charge } from '../physics/charge';
 import type { OptionSpecs, ParsedArgs } from './args';
+import type { CliIo } from './command';
 import { UsageError } from './usageError';
 import { parseCharge } from './values';
 
@@ -74,6 +76,7 @@ export function readScenarioOption(args: ParsedArgs): LoadedScenario | undefined
 export function readScenarioOrCharges(
   args: ParsedArgs,
   loaded: LoadedScenario | undefined = readScenarioOption(args),
+  warn: (message: string) => void = () => {},
 ): Charge[] {
   if (loaded !== undefined) return loaded.charges;
   if (args.all('trajectory').length === 0 && args.all('charge').length === 0) {
@@ -81,11 +84,18 @@ export function readScenarioOrCharges(
       'give the charges with --scenario FILE.json, or at least one --trajectory FILE.csv with its --charge Q',
     );
   }
-  return readCharges(args);
+  return readCharges(args, warn);
 }
 
-/** The charges named by repeated --trajectory FILE --charge Q pairs, files read and checked. */
-export function readCharges(args: ParsedArgs): Charge[] {
+/**
+ * The charges named by repeated --trajectory FILE --charge Q pairs, files read and checked as
+ * the app's import checks them: `warn` hears of a file whose positions and velocities disagree
+ * about how far the charge moves, which is what a wrong unit looks like.
+ */
+export function readCharges(
+  args: ParsedArgs,
+  warn: (message: string) => void = () => {},
+): Charge[] {
   const trajectories = args.all('trajectory');
   const chargeTexts = args.all('charge');
   if (trajectories.length === 0) {
@@ -99,7 +109,16 @@ export function readCharges(args: ParsedArgs): Charge[] {
   }
   const values = chargeTexts.map((text) => parseCharge(text, '--charge'));
   const units = trajectoryUnits(args);
-  return trajectories.map((file, k) => ({ charge: values[k], path: readTrajectory(file, units) }));
+  return trajectories.map((file, k) => {
+    const { summary, path } = importTrajectory(readTextFile(file), file, units);
+    const mismatch = unitsMismatch(summary);
+    if (mismatch !== null) {
+      warn(
+        `warning: ${file}: ${mismatch}; check --length-unit and --time-unit (now ${units.length} and ${units.time})`,
+      );
+    }
+    return { charge: values[k], path: pathFromTransfer(path) };
+  });
 }
 
 /** The units of --length-unit and --time-unit, SI where absent. */
@@ -117,4 +136,9 @@ function trajectoryUnits(args: ParsedArgs): TrajectoryUnits {
     );
   }
   return { length, time };
+}
+
+/** A warning as one line on standard error, prefixed like the command's errors. */
+export function warnTo(io: CliIo): (message: string) => void {
+  return (message) => io.stderr.write(`conecast: ${message}\n`);
 }

@@ -36,6 +36,20 @@ export interface TrajectorySummary {
   positionsPerVelocity: number | null;
 }
 
+/** Positions and velocities may disagree by this factor before a file's units are doubted. */
+const UNITS_TOLERANCE = 1.05;
+
+/**
+ * "the positions move 1.00e-6 times as far per step as the velocities say" when the summary's
+ * positions and velocities disagree beyond 5 % (a wrong unit, most often), else null.
+ */
+export function unitsMismatch(summary: TrajectorySummary): string | null {
+  const ratio = summary.positionsPerVelocity;
+  if (ratio === null || Math.abs(Math.log(ratio)) <= Math.log(UNITS_TOLERANCE)) return null;
+  const shown = ratio >= 1e-3 && ratio < 1e4 ? ratio.toPrecision(3) : ratio.toExponential(2);
+  return `the positions move ${shown} times as far per step as the velocities say`;
+}
+
 /** Steps looked at for positionsPerVelocity: an even spread is enough for a median. */
 const CONSISTENCY_STEPS = 4096;
 

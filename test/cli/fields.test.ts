@@ -38,6 +38,23 @@ const GRID = [
   [0.1, 0.6, -0.2],
 ];
 
+/** The orbit with t in ns, x, y, z in mm, velocities in mm/ns (1 mm/ns = 1e6 m/s) and accelerations in mm/ns² (1e15 m/s²). */
+function inMillimetresAndNanoseconds(): PathColumns {
+  return {
+    t: Array.from(ORBIT.t, (t) => t * 1e9),
+    x: Array.from(ORBIT.x, (x) => x * 1e3),
+    y: Array.from(ORBIT.y, (y) => y * 1e3),
+    z: Array.from(ORBIT.z, (z) => z * 1e3),
+    vx: Array.from(ORBIT.vx!, (v) => v * 1e-6),
+    vy: Array.from(ORBIT.vy!, (v) => v * 1e-6),
+    vz: Array.from(ORBIT.vz!, (v) => v * 1e-6),
+    // 1 mm/ns² = 1e15 m/s².
+    ax: Array.from(ORBIT.ax!, (a) => a * 1e-15),
+    ay: Array.from(ORBIT.ay!, (a) => a * 1e-15),
+    az: Array.from(ORBIT.az!, (a) => a * 1e-15),
+  };
+}
+
 /** Field components in the CLI's column order, from E through the Poynting vector. */
 function fieldColumns(f: FieldSample): number[] {
   const m = 1 / VACUUM_PERMEABILITY;
@@ -262,20 +279,7 @@ describe('conecast fields', () => {
   });
 
   it('reads a trajectory written in mm and ns as the same charge in SI', async () => {
-    // The same orbit with t in ns, x, y, z in mm and velocities in mm/ns (1 mm/ns = 1e6 m/s).
-    const inMmNs = {
-      t: Array.from(ORBIT.t, (t) => t * 1e9),
-      x: Array.from(ORBIT.x, (x) => x * 1e3),
-      y: Array.from(ORBIT.y, (y) => y * 1e3),
-      z: Array.from(ORBIT.z, (z) => z * 1e3),
-      vx: Array.from(ORBIT.vx!, (v) => v * 1e-6),
-      vy: Array.from(ORBIT.vy!, (v) => v * 1e-6),
-      vz: Array.from(ORBIT.vz!, (v) => v * 1e-6),
-      // 1 mm/ns² = 1e15 m/s².
-      ax: Array.from(ORBIT.ax!, (a) => a * 1e-15),
-      ay: Array.from(ORBIT.ay!, (a) => a * 1e-15),
-      az: Array.from(ORBIT.az!, (a) => a * 1e-15),
-    };
+    const inMmNs = inMillimetresAndNanoseconds();
     const scaledFile = scratch.file('orbit-mm-ns.csv', trajectoryText(inMmNs));
     const si = await runInProcess([
       'fields',
@@ -311,6 +315,39 @@ describe('conecast fields', () => {
         expect(Math.abs(b[r][c] - a[r][c])).toBeLessThanOrEqual(1e-9 * scale);
       }
     }
+  });
+
+  it('warns on standard error when a file seems read in the wrong units, and still answers', async () => {
+    // The orbit in mm and ns with its velocity as βγ, read as m and s: the positions then move
+    // 1e-6 as far per step as βγ says (mm/ns read as m/s), as in the app's import preview.
+    const mmNs = inMillimetresAndNanoseconds();
+    const c = 299_792_458;
+    const rows = ['t,x,y,z,bgx,bgy,bgz'];
+    for (let i = 0; i < ORBIT.t.length; i++) {
+      const [vx, vy, vz] = [ORBIT.vx![i], ORBIT.vy![i], ORBIT.vz![i]];
+      const gamma = 1 / Math.sqrt(1 - (vx * vx + vy * vy + vz * vz) / (c * c));
+      const momentum = [(gamma * vx) / c, (gamma * vy) / c, (gamma * vz) / c];
+      rows.push([mmNs.t[i], mmNs.x[i], mmNs.y[i], mmNs.z[i], ...momentum].join(','));
+    }
+    const scaledFile = scratch.file('orbit-mm-ns-momentum.csv', `${rows.join('\n')}\n`);
+    const run = await runInProcess([
+      'fields',
+      '--trajectory',
+      scaledFile,
+      '--charge',
+      '-e',
+      '--points',
+      timedFile,
+    ]);
+    expect(run.status).toBe(0);
+    expect(run.stderr).toBe(
+      `conecast: warning: ${scaledFile}: the positions move 1.00e-6 times as far per step as the velocities say; check --length-unit and --time-unit (now m and s)\n`,
+    );
+    const right = await runInProcess([
+      ...['fields', '--trajectory', scaledFile, '--charge', '-e', '--points', timedFile],
+      ...['--length-unit', 'mm', '--time-unit', 'ns'],
+    ]);
+    expect(right.stderr).toBe('');
   });
 
   it.each([

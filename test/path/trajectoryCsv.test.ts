@@ -3,7 +3,6 @@ import { InputError } from '../../src/io/inputError';
 import { sampleMotion } from '../../src/path/analyticMotion';
 import { type PathState, pathState } from '../../src/path/pathState';
 import { circularOrbit } from '../../src/path/presets';
-import { readTrajectory } from '../../src/path/readTrajectory';
 import { SampledPath } from '../../src/path/sampledPath';
 import { parseTrajectory } from '../../src/path/trajectoryCsv';
 import { SPEED_OF_LIGHT } from '../../src/physics/constants';
@@ -182,10 +181,3 @@ describe('trajectory units and βγ columns', () => {
   });
 });
 
-describe('readTrajectory', () => {
-  it('names a missing file', () => {
-    expect(() => readTrajectory('beam-that-is-not-here.csv')).toThrow(
-      'cannot read beam-that-is-not-here.csv: no such file',
-    );
-  });
-});

@@ -8,7 +8,7 @@ import { vec3 } from '../../physics/vec3';
 import { type OptionSpecs, type ParsedArgs, parseArgs } from '../args';
 import { type CliIo, type Command, EXIT_OK } from '../command';
 import { LineWriter } from '../output';
-import { CHARGE_OPTIONS, readScenarioOrCharges } from '../readCharges';
+import { CHARGE_OPTIONS, readScenarioOrCharges, warnTo } from '../readCharges';
 import { UsageError } from '../usageError';
 import { parseNumberOption } from '../values';
 import { FIELDS_HELP, FIELDS_SUMMARY } from './fieldsHelp';
@@ -36,7 +36,7 @@ interface FieldsRequest {
 
 async function runFields(argv: readonly string[], io: CliIo): Promise<number> {
   const request = parseRequest(argv);
-  const charges: Charge[] = readScenarioOrCharges(request.args);
+  const charges: Charge[] = readScenarioOrCharges(request.args, undefined, warnTo(io));
   const points = readPoints(request.points);
   const ownTimes = points.optionalColumn('t');
   if (ownTimes !== undefined && request.time !== undefined) {

@@ -5,7 +5,7 @@ import { pathState } from '../../path/pathState';
 import { type OptionSpecs, parseArgs } from '../args';
 import { type CliIo, type Command, EXIT_OK } from '../command';
 import { LineWriter } from '../output';
-import { CHARGE_OPTIONS, readScenarioOrCharges } from '../readCharges';
+import { CHARGE_OPTIONS, readScenarioOrCharges, warnTo } from '../readCharges';
 import { UsageError } from '../usageError';
 import { parseNumberOption } from '../values';
 import { PATTERN_HEADER, POWER_HEADER, POWER_HELP, POWER_SUMMARY } from './powerHelp';
@@ -52,7 +52,7 @@ async function runPower(argv: readonly string[], io: CliIo): Promise<number> {
     throw new UsageError('--plane and --angles apply to --pattern only');
   }
 
-  const charges = readScenarioOrCharges(args);
+  const charges = readScenarioOrCharges(args, undefined, warnTo(io));
   const whichText = args.one('which');
   let index = 0;
   if (whichText !== undefined) {

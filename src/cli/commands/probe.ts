@@ -5,7 +5,7 @@ import { PROBE_HEADER, probeRow, SPECTRUM_HEADER, spectrumRow } from '../../io/p
 import { type OptionSpecs, parseArgs } from '../args';
 import { type CliIo, type Command, EXIT_OK } from '../command';
 import { LineWriter } from '../output';
-import { CHARGE_OPTIONS, readScenarioOrCharges } from '../readCharges';
+import { CHARGE_OPTIONS, readScenarioOrCharges, warnTo } from '../readCharges';
 import { parseList } from '../sliceOptions';
 import { UsageError } from '../usageError';
 import { parseNumberOption } from '../values';
@@ -76,7 +76,7 @@ async function runProbe(argv: readonly string[], io: CliIo): Promise<number> {
     }
   }
 
-  const charges = readScenarioOrCharges(args);
+  const charges = readScenarioOrCharges(args, undefined, warnTo(io));
   let sampling: { from: number; step: number; samples: number };
   if (samples === undefined) {
     const chosen = chooseSampling(charges, at, from, to);

@@ -8,7 +8,7 @@ import type { Charge } from '../../physics/charge';
 import { type OptionSpecs, parseArgs } from '../args';
 import { writeFileAtomic } from '../atomicWrite';
 import { type CliIo, type Command, EXIT_OK } from '../command';
-import { CHARGE_OPTIONS, readScenarioOption, readScenarioOrCharges } from '../readCharges';
+import { CHARGE_OPTIONS, readScenarioOption, readScenarioOrCharges, warnTo } from '../readCharges';
 import { sliceGeometry } from '../sliceOptions';
 import { UsageError } from '../usageError';
 import { parseNumberOption } from '../values';
@@ -95,7 +95,7 @@ async function runSlice(argv: readonly string[], io: CliIo): Promise<number> {
       : parseNumberOption(nearText, '--near-radius', 'a length in m');
   if (!(nearRadius >= 0))
     throw new UsageError(`option --near-radius needs a length of 0 m or more, got "${nearText}"`);
-  const charges: Charge[] = readScenarioOrCharges(args, loaded);
+  const charges: Charge[] = readScenarioOrCharges(args, loaded, warnTo(io));
 
   const { fields, ms, usedThreads } = await compute(spec, charges, threads, nearRadius);
   if (format === 'npy') {
