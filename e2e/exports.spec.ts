@@ -24,7 +24,8 @@ async function downloadsOf(
   const listener = (download: Download) => seen.push(download);
   page.on('download', listener);
   await click();
-  await expect.poll(() => seen.length).toBe(count);
+  // A picture computes its map afresh first: allow for that.
+  await expect.poll(() => seen.length, { timeout: 30_000 }).toBe(count);
   page.off('download', listener);
   const files: string[] = [];
   for (const download of seen) {
@@ -234,16 +235,31 @@ test('the picture for a report decodes at the width asked for, with its colour b
     for (let p = 0; p < column.length; p += 4)
       colours.add((column[p] << 16) | (column[p + 1] << 8) | column[p + 2]);
     const corner = context.getImageData(image.width - 5, 5, 1, 1).data;
+    // Colour steps along a row through the middle of the map: one per grid cell at most.
+    const row = context.getImageData(
+      Math.round(left),
+      Math.round(top + plotHeight / 2),
+      Math.round(plotWidth),
+      1,
+    ).data;
+    let steps = 0;
+    for (let p = 4; p < row.length; p += 4) {
+      if (row[p] !== row[p - 4] || row[p + 1] !== row[p - 3] || row[p + 2] !== row[p - 2]) steps++;
+    }
     return {
       width: image.width,
       height: image.height,
       barColours: colours.size,
       corner: Array.from(corner),
+      mapSteps: steps,
     };
   }, bytes);
   expect(found.width).toBe(2400);
   expect(found.height).toBeGreaterThan(2000);
   expect(found.barColours).toBeGreaterThan(100);
+  // Computed afresh on a finer grid than the 160 points across on screen (a point per two
+  // pixels, at most 1024): far more colour steps across than the screen's grid could give.
+  expect(found.mapSteps).toBeGreaterThan(400);
   expect(found.corner).toEqual([255, 255, 255, 255]);
   expect(errors).toEqual([]);
 });

@@ -1,6 +1,6 @@
 import type { Scenario, ScenarioPath } from '../../src/io/scenario';
 import { formatSI } from '../format/siFormat';
-import { PRESET_FORMS } from '../scenario/presetScenes';
+import { type ParamKind, PRESET_FORMS } from '../scenario/presetScenes';
 
 /** One line per charge: what it is, how it moves, and the numbers that make its path. */
 export function scenarioCaption(scenario: Scenario): string[] {
@@ -12,15 +12,34 @@ export function scenarioCaption(scenario: Scenario): string[] {
   return lines;
 }
 
+/** A parameter's value with its SI unit (β, γ and K are plain numbers). */
+function withUnit(value: number, kind: ParamKind): string {
+  const unit = SI_UNITS[kind];
+  if (unit === '') return String(Number(value.toPrecision(4)));
+  return formatSI(value, unit, 4);
+}
+
+const SI_UNITS: Record<ParamKind, string> = {
+  length: 'm',
+  time: 's',
+  frequency: 'Hz',
+  acceleration: 'm/s²',
+  speed: '',
+  gamma: '',
+  angle: 'rad',
+  number: '',
+};
+
 function describePath(path: ScenarioPath): string {
   switch (path.kind) {
     case 'preset': {
       const form = PRESET_FORMS[path.preset];
       const params = path.params as Record<string, number>;
       const values = form.params.map(
-        (param) => `${param.key} = ${Number(params[param.key].toPrecision(4))}`,
+        (param) =>
+          `${param.kind === 'speed' ? 'β' : param.label} = ${withUnit(params[param.key], param.kind)}`,
       );
-      return `${form.title.toLowerCase()}, ${values.join(', ')} (m, s, Hz, m/s², rad)`;
+      return `${form.title.toLowerCase()}, ${values.join(', ')}`;
     }
     case 'sketch':
       return path.speed.kind === 'constant'

@@ -30,6 +30,15 @@ const THEMES = {
   light: { page: '#ffffff', text: '#15181d', muted: '#4b5563', path: '#111827', shell: '#0f766e' },
 } as const;
 
+/** Margins left (axis) and right (colour bar) of the map, pixels in a 1200-pixel picture. */
+const LEFT_MARGIN = 90;
+const RIGHT_MARGIN = 220;
+
+/** Width of the map within a picture `width` pixels wide: the rest holds axes and colour bar. */
+export function plotWidthOf(width: number): number {
+  return width * (1 - (LEFT_MARGIN + RIGHT_MARGIN) / 1200);
+}
+
 /**
  * The map with its colour bar and units, axes, a scale bar, the time and a caption, drawn
  * afresh at the asked size on a 2D canvas (not a screenshot scaled up). Returns the canvas.
@@ -40,11 +49,10 @@ export function renderPicture(request: PictureRequest): HTMLCanvasElement {
   const { spec, fields } = shown.map;
   const u = width / 1200; // type and lines scale with the picture
   const font = (size: number) => `${Math.round(size * u)}px system-ui, sans-serif`;
-  const left = 90 * u;
-  const right = 220 * u;
+  const left = LEFT_MARGIN * u;
   const top = (70 + 22 * request.caption.length) * u;
   const bottom = 70 * u;
-  const plotWidth = width - left - right;
+  const plotWidth = plotWidthOf(width);
   const plotHeight = (plotWidth * spec.height) / spec.width;
   const height = Math.round(top + plotHeight + bottom);
   const canvas = document.createElement('canvas');

@@ -16,7 +16,12 @@ let last: DisplayedMap | null = null;
 export function displayedMap(map: FieldMap | null, display: MapDisplay): DisplayedMap | null {
   if (map === null) return null;
   if (last !== null && last.map === map && last.display === display) return last;
-  const quantity = quantityValues(map.fields, display);
-  last = { map, display, quantity, scale: colourScaleFor(quantity, display) };
+  last = displayMap(map, display);
   return last;
+}
+
+/** The displayed map for (map, display), computed afresh and not remembered (for a picture). */
+export function displayMap(map: FieldMap, display: MapDisplay): DisplayedMap {
+  const quantity = quantityValues(map.fields, display);
+  return { map, display, quantity, scale: colourScaleFor(quantity, display) };
 }

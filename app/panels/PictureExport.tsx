@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { scenarioCaption } from '../export/caption';
-import { type PictureBackground, renderPicture } from '../export/renderPicture';
-import { displayedMap } from '../field/displayedMap';
+import { pictureMap } from '../export/pictureMap';
+import { type PictureBackground, plotWidthOf, renderPicture } from '../export/renderPicture';
+import { displayedMap, displayMap } from '../field/displayedMap';
 import { useAppState } from '../hooks/useAppState';
 import { download, fileStem } from '../io/download';
 import { appStore } from '../store/appStore';
@@ -14,10 +15,24 @@ export function PictureExport() {
   const [width, setWidth] = useState(1800);
   const [background, setBackground] = useState<PictureBackground>('light');
   const [problem, setProblem] = useState<string | null>(null);
-  const save = () => {
+  const [computing, setComputing] = useState(false);
+  const save = async () => {
     const state = appStore.getState();
-    const shown = displayedMap(state.fieldMap, state.display);
-    if (shown === null || state.scenario === null) return;
+    const onScreen = displayedMap(state.fieldMap, state.display);
+    if (onScreen === null || state.scenario === null) return;
+    // The map is computed again on the picture's own, finer grid, and painted with the
+    // colours on screen (their range held), so the picture shows what was seen, sharper.
+    setComputing(true);
+    let fine: Awaited<ReturnType<typeof pictureMap>>;
+    try {
+      fine = await pictureMap(onScreen.map, plotWidthOf(width));
+    } finally {
+      setComputing(false);
+    }
+    const held = onScreen.scale
+      ? { ...state.display, range: { min: onScreen.scale.min, max: onScreen.scale.max } }
+      : state.display;
+    const shown = displayMap(fine, held);
     const canvas = renderPicture({
       shown,
       charges: shown.map.charges,
@@ -69,9 +84,14 @@ export function PictureExport() {
           <option value="dark">dark</option>
         </select>
       </div>
-      <button type="button" disabled={!ready} onClick={save}>
+      <button type="button" disabled={!ready || computing} onClick={() => void save()}>
         Save picture (PNG)
       </button>
+      {computing && (
+        <p className="muted" role="status">
+          Computing the picture's map on its own grid…
+        </p>
+      )}
       {problem && (
         <p className="field-problem" role="alert">
           Picture not saved: {problem}
