@@ -3,6 +3,7 @@ import uPlot from 'uplot';
 import 'uplot/dist/uPlot.min.css';
 import { formatSI } from '../format/siFormat';
 import { useElementSize } from '../hooks/useElementSize';
+import { axisFactor } from './axisFactor';
 
 export interface ChartSeries {
   label: string;
@@ -37,16 +38,29 @@ const AXIS = {
 };
 
 /**
- * Values along an axis with SI prefixes and the unit, e.g. "20 ps", "1.5 µV/m"; on a log axis
- * only the decades are labelled, as the splits between them would crowd the axis.
+ * Values along an axis with SI prefixes and the unit, e.g. "20 ps", "1.5 µV/m", for data
+ * divided by `factor`; on a log axis only the decades are labelled, as the splits between them
+ * would crowd the axis.
  */
-function siValues(unit: string, log = false) {
+function siValues(unit: string, factor: number, log = false) {
   return (_: uPlot, splits: number[]) =>
     splits.map((value) => {
-      if (!log) return formatSI(value, unit, 3);
+      if (!log) return formatSI(value * factor, unit, 3);
       const decade = Math.log10(value);
-      return Math.abs(decade - Math.round(decade)) < 1e-9 ? formatSI(value, unit, 1) : '';
+      return Math.abs(decade - Math.round(decade)) < 1e-9 ? formatSI(value * factor, unit, 1) : '';
     });
+}
+
+/**
+ * The y range of a linear axis: uPlot's, except for a series that varies by under 1e-4 of its
+ * size (the power of a steady orbit, whose only ripple is the path's interpolation error),
+ * which gets a band of ±10 % around it rather than that ripple blown up to the full height.
+ */
+function linearRange(_: uPlot, min: number, max: number): uPlot.Range.MinMax {
+  const size = Math.max(Math.abs(min), Math.abs(max));
+  if (max - min > 1e-4 * size) return uPlot.rangeNum(min, max, 0.1, true);
+  if (size === 0) return [-1, 1];
+  return [min - 0.1 * size, max + 0.1 * size];
 }
 
 /** A line chart (uPlot) whose axes carry SI units; resizes with its box. */
@@ -59,31 +73,43 @@ export function LineChart(props: LineChartProps) {
   useEffect(() => {
     const element = box.current;
     if (element === null || width === 0) return;
+    const xFactor = axisFactor([x]);
+    const yFactor = axisFactor(series.map((entry) => entry.values));
     const data: uPlot.AlignedData = [
-      Array.from(x),
-      ...series.map((entry) => Array.from(entry.values, (v) => (logY && !(v > 0) ? null : v))),
+      Array.from(x, (v) => v / xFactor),
+      ...series.map((entry) =>
+        Array.from(entry.values, (v) => (logY && !(v > 0) ? null : v / yFactor)),
+      ),
     ];
     const options: uPlot.Options = {
       width,
       height,
       legend: { show: true },
       cursor: { drag: { x: true, y: false } },
-      scales: { x: { time: false, distr: logX ? 3 : 1 }, y: { distr: logY ? 3 : 1 } },
+      scales: {
+        x: { time: false, distr: logX ? 3 : 1 },
+        y: {
+          distr: logY ? 3 : 1,
+          range: logY ? undefined : linearRange,
+        },
+      },
       axes: [
-        { ...AXIS, values: siValues(xUnit, logX), size: 36 },
-        { ...AXIS, values: siValues(yUnit, logY), size: 96 },
+        { ...AXIS, values: siValues(xUnit, xFactor, logX), size: 36 },
+        // Wide enough for "1e-32 J/(m²·Hz)", beyond the SI prefixes.
+        { ...AXIS, values: siValues(yUnit, yFactor, logY), size: 124 },
       ],
       series: [
         {
           label: xUnit === 's' ? 't' : 'f',
-          value: (_, v) => (v == null ? '–' : formatSI(v, xUnit, 5)),
+          value: (_, v) => (v == null ? '–' : formatSI(v * xFactor, xUnit, 5)),
         },
         ...series.map((entry) => ({
           label: entry.label,
           stroke: entry.colour,
           width: 1.4,
           points: { show: false },
-          value: (_: uPlot, v: number | null) => (v == null ? '–' : formatSI(v, yUnit, 4)),
+          value: (_: uPlot, v: number | null) =>
+            v == null ? '–' : formatSI(v * yFactor, yUnit, 4),
         })),
       ],
       hooks: {
@@ -97,7 +123,7 @@ export function LineChart(props: LineChartProps) {
             ctx.setLineDash([5, 4]);
             ctx.font = `${12 * devicePixelRatio}px system-ui, sans-serif`;
             for (const mark of marks) {
-              const px = u.valToPos(mark.x, 'x', true);
+              const px = u.valToPos(mark.x / xFactor, 'x', true);
               if (!(px >= u.bbox.left && px <= u.bbox.left + u.bbox.width)) continue;
               ctx.beginPath();
               ctx.moveTo(px, u.bbox.top);
