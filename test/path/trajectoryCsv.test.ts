@@ -180,4 +180,3 @@ describe('trajectory units and βγ columns', () => {
     );
   });
 });
-
