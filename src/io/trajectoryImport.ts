@@ -1,6 +1,6 @@
 import type { PathTransfer } from '../engine/workerProtocol';
 import { MAX_PATH_SAMPLES } from '../path/pathLimits';
-import { pathToTransfer } from '../path/pathTransfer';
+import { pathColumnsOf } from '../path/pathTransfer';
 import { buildTrajectory, TRAJECTORY_SCHEMA, trajectoryColumns } from '../path/trajectoryCsv';
 import { SPEED_OF_LIGHT } from '../physics/constants';
 import { type CsvTable, parseCsvTable } from './csvTable';
@@ -98,7 +98,8 @@ export function importFromTable(written: CsvTable, units: TrajectoryUnits): Impo
   const table = written.copy();
   const columns = trajectoryColumns(table, units);
   const built = buildTrajectory(table, columns);
-  const path = pathToTransfer(built);
+  // The path is built for this result alone: its columns go as they are, not copied.
+  const path = pathColumnsOf(built);
   const beta = Math.min(built.maxSpeed / SPEED_OF_LIGHT, 1);
   return {
     summary: {

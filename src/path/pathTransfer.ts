@@ -1,6 +1,15 @@
 import type { PathTransfer } from '../engine/workerProtocol';
 import { PATH_COLUMNS, SampledPath } from './sampledPath';
 
+/**
+ * A path's own columns, not copied, for a path its maker hands on whole and keeps no more (an
+ * import worker's result): transferring them detaches them from `path`.
+ */
+export function pathColumnsOf(path: SampledPath): PathTransfer {
+  const { t, x, y, z, vx, vy, vz, ax, ay, az, maxSpeed } = path;
+  return { t, x, y, z, vx, vy, vz, ax, ay, az, maxSpeed };
+}
+
 /** Copies of a path's columns for posting to a worker (the path keeps its own). */
 export function pathToTransfer(path: SampledPath): PathTransfer {
   return {
