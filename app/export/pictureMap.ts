@@ -3,10 +3,10 @@ import { createBrowserSlicePool } from '../engine/browserSlicePool';
 import { type FieldMap, summariseField } from '../field/fieldMap';
 
 /** Most grid points along a side of a picture's map: 1024² is about a second on two cores. */
-export const PICTURE_GRID_LIMIT = 1024;
+const PICTURE_GRID_LIMIT = 1024;
 
 /** The grid a picture's map is computed on: a point per two pixels, at most PICTURE_GRID_LIMIT. */
-export function pictureSpec(spec: SliceSpec, plotWidthPixels: number): SliceSpec {
+function pictureSpec(spec: SliceSpec, plotWidthPixels: number): SliceSpec {
   const nx = Math.min(PICTURE_GRID_LIMIT, Math.max(spec.nx, Math.round(plotWidthPixels / 2)));
   const ny = Math.max(1, Math.round((nx * spec.height) / spec.width));
   return { ...spec, nx, ny: Math.min(ny, PICTURE_GRID_LIMIT) };

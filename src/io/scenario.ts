@@ -15,11 +15,9 @@ import {
 } from './scenarioSchema';
 
 export { ScenarioError } from './scenarioError';
-export { OLDEST_SCENARIO_VERSION } from './scenarioMigrations';
 export { rememberBuiltPath } from './scenarioPaths';
 export {
   MAX_PATH_SAMPLES,
-  MAX_PROBES,
   type SampleColumn,
   SCENARIO_FORMAT,
   SCENARIO_VERSION,
@@ -29,7 +27,6 @@ export type Scenario = z.infer<typeof scenarioSchema>;
 export type ScenarioCharge = Scenario['charges'][number];
 export type ScenarioPath = ScenarioCharge['path'];
 export type ScenarioView = Scenario['view'];
-export type ScenarioProbe = Scenario['probes'][number];
 export type PresetName = z.infer<typeof presetPathSchema>['preset'];
 export type ScenarioSamplesPath = z.infer<typeof samplesPathSchema>;
 export type ScenarioSketchPath = z.infer<typeof sketchPathSchema>;

@@ -33,10 +33,7 @@ export function parseTrajectory(
  * velocities × length/time, accelerations × length/time², βγ turned into v = cβγ/√(1 + |βγ|²).
  * The path's sample errors are turned into file lines. The table's columns are scaled in place.
  */
-export function trajectoryFromTable(
-  table: CsvTable,
-  units: TrajectoryUnits = SI_UNITS,
-): SampledPath {
+function trajectoryFromTable(table: CsvTable, units: TrajectoryUnits = SI_UNITS): SampledPath {
   return buildTrajectory(table, trajectoryColumns(table, units));
 }
 
